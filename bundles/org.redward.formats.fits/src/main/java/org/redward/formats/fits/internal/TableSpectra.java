@@ -7,7 +7,8 @@ import java.util.Optional;
 
 import org.redward.api.formats.ColumnNames;
 import org.redward.api.formats.SpectrumRecord;
-import org.redward.formats.fits.internal.Assembly.ErrorKind;
+import org.redward.api.formats.SpectrumAssembly;
+import org.redward.api.formats.SpectrumAssembly.ErrorKind;
 import org.redward.spectrum.Medium;
 import org.redward.spectrum.Sampling;
 import org.redward.spectrum.SpectralUnit;
@@ -256,7 +257,7 @@ final class TableSpectra implements Plan {
                 b.objectId(md.objectId().map(x -> x + "#").orElse("row ") + row);
             }
         }
-        return Assembly.build(coords, unit, medium, sampling, f, e, kind, m, fluxUnit, b.build(),
+        return SpectrumAssembly.build(coords, unit, medium, sampling, f, e, kind, m, fluxUnit, b.build(),
                 settings.profile().map(p -> p.maskedRegionsVacuumAngstrom()).orElse(List.of()),
                 "column '" + flux.name() + "'", err.map(c -> "column '" + c.name() + "'").orElse(""),
                 maskCol.map(c -> "column '" + c.name() + "'").orElse(""));
