@@ -103,6 +103,7 @@ public final class InfoCommand implements Command {
                     row(out, r);
                 }
             }
+            progress.advance(s.filesDone() - lastDone);
         }
         PrintStream note = a.json ? ctx.err() : out;
         if (!a.json) {
