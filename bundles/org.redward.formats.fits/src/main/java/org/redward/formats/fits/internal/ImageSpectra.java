@@ -160,7 +160,7 @@ final class ImageSpectra implements Plan {
             return SpectrumRecord.ok(view.file, index, where, readSpectrum(index, where));
         } catch (IllegalArgumentException e) {
             String m = e.getMessage();
-            return SpectrumRecord.failed(view.file, index, where, view.file + ": " + (m.startsWith("HDU ") ? m : where + ": " + m));
+            return SpectrumRecord.failed(view.file, index, where, view.file + ": " + (m.startsWith(where) ? m : where + ": " + m));
         } catch (Exception | OutOfMemoryError e) {
             return SpectrumRecord.failed(view.file, index, where, view.file + ": " + where + ": cannot be read ("
                     + FitsFileView.message(e) + ")");

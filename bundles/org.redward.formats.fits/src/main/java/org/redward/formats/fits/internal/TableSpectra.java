@@ -54,7 +54,7 @@ final class TableSpectra implements Plan {
 
     /** Column names (TTYPEn) of a table HDU, in order. */
     static List<String> columnNames(Header h) {
-        int n = h.getIntValue("TFIELDS", 0);
+        int n = Math.min(999, h.getIntValue("TFIELDS", 0));
         List<String> out = new ArrayList<>();
         for (int i = 1; i <= n; i++) {
             String t = h.getStringValue("TTYPE" + i);
@@ -162,7 +162,7 @@ final class TableSpectra implements Plan {
     }
 
     private static String prefixed(String where, String message) {
-        return message.startsWith("HDU ") ? message : where + ": " + message;
+        return message.startsWith(where) ? message : where + ": " + message;
     }
 
     private Spectrum readSpectrum(int hdu, int row, String where) throws Exception {
@@ -173,6 +173,9 @@ final class TableSpectra implements Plan {
         Keys keys = view.keys(hdu);
         Column flux = pick(names, settings, "flux.column", ColumnNames.FLUX, where)
                 .orElseThrow(() -> new IllegalArgumentException("no flux column (columns are " + names + ")"));
+        if (row < 0 && h.getIntValue("NAXIS2", 0) == 0) {
+            throw new IllegalArgumentException("no pixels (the table has no rows)");
+        }
         double[] f = column(t, h, flux, row);
         int n = f.length;
         // errors
