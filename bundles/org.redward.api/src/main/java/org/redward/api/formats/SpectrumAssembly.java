@@ -51,7 +51,38 @@ public final class SpectrumAssembly {
     public static Spectrum build(double[] coordinates, SpectralUnit unit, Medium medium, Sampling sampling,
             double[] flux, double[] errors, ErrorKind kind, double[] mask, String fluxUnit,
             SpectrumMetadata metadata, List<double[]> maskedRegions, String fluxName, String errorName, String maskName) {
-        int n = coordinates.length;
+        if (flux.length != coordinates.length) {
+            throw new IllegalArgumentException(fluxName + " has " + flux.length + " values but the wavelength axis has " + coordinates.length);
+        }
+        return build(axis(coordinates, unit, medium, sampling), flux, errors, kind, mask, fluxUnit, metadata, maskedRegions,
+                fluxName, errorName, maskName);
+    }
+
+    /**
+     * The axis of {@code coordinates} as read; readers of many spectra on one axis make it once
+     * and pass it to {@link #build(SpectralAxis, double[], double[], ErrorKind, double[], String,
+     * SpectrumMetadata, List, String, String, String)}.
+     *
+     * @throws IllegalArgumentException {@code wavelength axis: ...} if it is empty, not finite or not monotonic
+     */
+    public static SpectralAxis axis(double[] coordinates, SpectralUnit unit, Medium medium, Sampling sampling) {
+        try {
+            return SpectralAxis.of(coordinates, unit, medium, sampling);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("wavelength axis: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Builds a spectrum on an axis made with {@link #axis}. The arrays are in file order: for a
+     * frequency axis they are reversed here, as the axis was.
+     *
+     * @throws IllegalArgumentException naming the array whose length differs from the axis
+     */
+    public static Spectrum build(SpectralAxis axis, double[] flux, double[] errors, ErrorKind kind, double[] mask,
+            String fluxUnit, SpectrumMetadata metadata, List<double[]> maskedRegions, String fluxName, String errorName,
+            String maskName) {
+        int n = axis.size();
         if (flux.length != n) {
             throw new IllegalArgumentException(fluxName + " has " + flux.length + " values but the wavelength axis has " + n);
         }
@@ -63,9 +94,12 @@ public final class SpectrumAssembly {
         }
         double[] iv = null;
         if (errors != null) {
-            iv = new double[n];
-            for (int i = 0; i < n; i++) {
-                iv[i] = kind.toInverseVariance(errors[i]);
+            iv = errors;
+            if (kind != ErrorKind.INVERSE_VARIANCE) {
+                iv = new double[n];
+                for (int i = 0; i < n; i++) {
+                    iv[i] = kind.toInverseVariance(errors[i]);
+                }
             }
         }
         boolean[] bad = new boolean[n];
@@ -75,16 +109,10 @@ public final class SpectrumAssembly {
             }
         }
         double[] f = flux;
-        if (unit.isFrequency()) {
+        if (axis.unitAsRead().isFrequency()) {
             f = reversed(flux);
             iv = iv == null ? null : reversed(iv);
             bad = reversed(bad);
-        }
-        SpectralAxis axis;
-        try {
-            axis = SpectralAxis.of(coordinates, unit, medium, sampling);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("wavelength axis: " + e.getMessage(), e);
         }
         if (maskedRegions != null && !maskedRegions.isEmpty()) {
             for (int i = 0; i < n; i++) {

@@ -9,6 +9,7 @@ import org.redward.api.formats.SpectrumAssembly;
 import org.redward.api.formats.SpectrumAssembly.ErrorKind;
 import org.redward.spectrum.Medium;
 import org.redward.spectrum.Sampling;
+import org.redward.spectrum.SpectralAxis;
 import org.redward.spectrum.SpectralUnit;
 import org.redward.spectrum.Spectrum;
 import org.redward.spectrum.SpectrumMetadata;
@@ -52,6 +53,11 @@ final class ImageSpectra implements Plan {
     private final int maskHdu;
     private final int waveHdu;
     private final String layout;
+    /** The axis from keywords, made once for all rows (or why it cannot be made). */
+    private SpectralAxis keywordAxis;
+    private String keywordAxisError;
+    private String keywordMediumSource;
+    private SpectrumMetadata baseMetadata;
 
     private ImageSpectra(FitsFileView view, int hdu, Settings settings, boolean planes) {
         this.view = view;
@@ -231,10 +237,7 @@ final class ImageSpectra implements Plan {
             }
         }
         Keys keys = view.keys(hdu);
-        double[] coords;
-        SpectralUnit unit;
-        Sampling sampling;
-        Medium medium;
+        SpectralAxis axis;
         String mediumSource;
         if (waveHdu >= 0) {
             double[] raw = row(waveHdu, rowsOf(waveHdu) == 1 ? 0 : index, "wavelength");
@@ -242,39 +245,44 @@ final class ImageSpectra implements Plan {
                 throw new IllegalArgumentException(view.name(waveHdu) + " has " + raw.length + " wavelengths but the flux has " + flux.length);
             }
             boolean log = raw.length > 0 && Math.abs(raw[raw.length - 1]) < 10;
-            coords = new double[raw.length];
+            double[] coords = new double[raw.length];
             for (int i = 0; i < raw.length; i++) {
                 coords[i] = log ? Math.pow(10.0, raw[i]) : raw[i];
             }
             Keys wk = view.keys(waveHdu);
             String bunit = wk.own().getStringValue("BUNIT");
             Optional<String> u = settings.get("wavelength.unit").or(() -> Optional.ofNullable(bunit).filter(x -> !x.isBlank()));
-            unit = u.isEmpty() || log ? SpectralUnit.ANGSTROM : SpectralUnit.parse(u.get()).orElseThrow(() ->
+            SpectralUnit unit = u.isEmpty() || log ? SpectralUnit.ANGSTROM : SpectralUnit.parse(u.get()).orElseThrow(() ->
                     new IllegalArgumentException(view.name(waveHdu) + ": unknown wavelength unit '" + u.get() + "' (BUNIT)"));
-            sampling = log ? Sampling.LOG_LINEAR : Sampling.TABULATED;
             Medium[] m = new Medium[1];
             mediumSource = SpectralSolution.medium(wk, settings, "", m);
-            medium = m[0];
+            axis = SpectrumAssembly.axis(coords, unit, m[0], log ? Sampling.LOG_LINEAR : Sampling.TABULATED);
         } else {
-            SpectralSolution sol;
-            try {
-                sol = SpectralSolution.fromKeywords(keys, 1, flux.length, settings);
-            } catch (IllegalArgumentException e) {
-                throw new IllegalArgumentException(view.name(hdu) + ": wavelength axis: " + e.getMessage(), e);
+            if (keywordAxis == null && keywordAxisError == null) {
+                try {
+                    SpectralSolution sol = SpectralSolution.fromKeywords(keys, 1, flux.length, settings);
+                    keywordAxis = SpectrumAssembly.axis(sol.coordinates, sol.unit, sol.medium, sol.sampling);
+                    keywordMediumSource = sol.mediumSource;
+                } catch (IllegalArgumentException e) {
+                    keywordAxisError = view.name(hdu) + ": wavelength axis: " + e.getMessage().replaceFirst("^wavelength axis: ", "");
+                }
             }
-            coords = sol.coordinates;
-            unit = sol.unit;
-            sampling = sol.sampling;
-            medium = sol.medium;
-            mediumSource = sol.mediumSource;
+            if (keywordAxisError != null) {
+                throw new IllegalArgumentException(keywordAxisError);
+            }
+            axis = keywordAxis;
+            mediumSource = keywordMediumSource;
         }
         String fluxUnit = settings.get("flux.unit").orElse(keys.text("BUNIT").orElse(""));
-        SpectrumMetadata md = MetadataKeywords.read(keys, settings);
+        if (baseMetadata == null) {
+            baseMetadata = MetadataKeywords.read(keys, settings);
+        }
+        SpectrumMetadata md = baseMetadata;
         SpectrumMetadata.Builder b = md.toBuilder().extra("redward.medium_source", mediumSource);
         if (!planes && rows > 1) {
             b.objectId(md.objectId().map(x -> x + "#").orElse("row ") + index);
         }
-        return SpectrumAssembly.build(coords, unit, medium, sampling, flux, err, kind, mask, fluxUnit, b.build(),
+        return SpectrumAssembly.build(axis, flux, err, kind, mask, fluxUnit, b.build(),
                 settings.profile().map(p -> p.maskedRegionsVacuumAngstrom()).orElse(List.of()),
                 "the flux", errName, maskName);
     }

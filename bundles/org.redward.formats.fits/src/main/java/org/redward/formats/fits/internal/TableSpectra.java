@@ -42,6 +42,20 @@ final class TableSpectra implements Plan {
     private final Settings settings;
     private final String layout;
     private final boolean own;
+    /** For one spectrum per row with the axis in keywords: the axis made once (or why it cannot be made). */
+    private org.redward.spectrum.SpectralAxis keywordAxis;
+    private String keywordAxisError;
+    private String keywordMediumSource;
+    private SpectrumMetadata rowBaseMetadata;
+    /** Column choices of the last HDU read (one spectrum per row: the same for every row). */
+    private int chosenFor = -1;
+    private List<String> names;
+    private Column flux;
+    private Optional<Column> err;
+    private ErrorKind kind;
+    private Optional<Column> maskCol;
+    private Optional<Column> wave;
+    private Optional<Column> idCol;
 
     private TableSpectra(FitsFileView view, List<Integer> hdus, boolean rowPerSpectrum, Settings settings, String layout) {
         this.view = view;
@@ -169,32 +183,18 @@ final class TableSpectra implements Plan {
         BinaryTableHDU th = (BinaryTableHDU) view.hdus.get(hdu);
         Header h = th.getHeader();
         BinaryTable t = th.getData();
-        List<String> names = columnNames(h);
         Keys keys = view.keys(hdu);
-        Column flux = pick(names, settings, "flux.column", ColumnNames.FLUX, where)
-                .orElseThrow(() -> new IllegalArgumentException("no flux column (columns are " + names + ")"));
+        if (chosenFor != hdu) {
+            choose(h, where);
+            chosenFor = hdu;
+        }
         if (row < 0 && h.getIntValue("NAXIS2", 0) == 0) {
             throw new IllegalArgumentException("no pixels (the table has no rows)");
         }
         double[] f = column(t, h, flux, row);
         int n = f.length;
-        // errors
-        ErrorKind kind = ErrorKind.INVERSE_VARIANCE;
-        Optional<Column> err = pick(names, settings, "ivar.column", settings.get("error.column").isPresent()
-                || settings.get("variance.column").isPresent() ? List.of() : ColumnNames.IVAR, where);
-        if (err.isEmpty()) {
-            err = pick(names, settings, "error.column", settings.get("variance.column").isPresent() ? List.of() : ColumnNames.SIGMA, where);
-            kind = ErrorKind.SIGMA;
-        }
-        if (err.isEmpty()) {
-            err = pick(names, settings, "variance.column", ColumnNames.VARIANCE, where);
-            kind = ErrorKind.VARIANCE;
-        }
         double[] e = err.isPresent() && (!own || OwnFormat.hasErrors(h)) ? column(t, h, err.get(), row) : null;
-        Optional<Column> maskCol = pick(names, settings, "mask.column", ColumnNames.MASK, where);
         double[] m = maskCol.isPresent() ? column(t, h, maskCol.get(), row) : null;
-        // wavelength
-        Optional<Column> wave = pick(names, settings, "wavelength.column", ColumnNames.WAVELENGTH, where);
         double[] coords;
         SpectralUnit unit;
         Sampling sampling;
@@ -234,24 +234,80 @@ final class TableSpectra implements Plan {
                 mediumSource = SpectralSolution.medium(keys, settings, unit.isFrequency() ? "FREQ" : "", md);
             }
             medium = md[0];
-        } else {
+        } else if (!rowPerSpectrum) {
+            // one spectrum per HDU: each HDU has its own header
             SpectralSolution sol = SpectralSolution.fromKeywords(keys, 1, n, settings);
             coords = sol.coordinates;
             unit = sol.unit;
             sampling = sol.sampling;
             medium = sol.medium;
             mediumSource = sol.mediumSource;
+        } else {
+            if (keywordAxis == null && keywordAxisError == null) {
+                try {
+                    SpectralSolution sol = SpectralSolution.fromKeywords(keys, 1, n, settings);
+                    keywordAxis = SpectrumAssembly.axis(sol.coordinates, sol.unit, sol.medium, sol.sampling);
+                    keywordMediumSource = sol.mediumSource;
+                } catch (IllegalArgumentException x) {
+                    keywordAxisError = x.getMessage();
+                }
+            }
+            if (keywordAxisError != null) {
+                throw new IllegalArgumentException(keywordAxisError);
+            }
+            coords = null;
+            unit = keywordAxis.unitAsRead();
+            sampling = keywordAxis.samplingAsRead();
+            medium = keywordAxis.mediumAsRead();
+            mediumSource = keywordMediumSource;
         }
+        org.redward.spectrum.SpectralAxis axis = coords == null ? keywordAxis : SpectrumAssembly.axis(coords, unit, medium, sampling);
+        return finish(axis, h, t, keys, f, e, m, row, mediumSource);
+    }
+
+    /** Chooses the columns of a table HDU (profile settings first, then the usual names). */
+    private void choose(Header h, String where) {
+        names = columnNames(h);
+        List<String> n = names;
+        flux = pick(names, settings, "flux.column", ColumnNames.FLUX, where)
+                .orElseThrow(() -> new IllegalArgumentException("no flux column (columns are " + n + ")"));
+        kind = ErrorKind.INVERSE_VARIANCE;
+        err = pick(names, settings, "ivar.column", settings.get("error.column").isPresent()
+                || settings.get("variance.column").isPresent() ? List.of() : ColumnNames.IVAR, where);
+        if (err.isEmpty()) {
+            err = pick(names, settings, "error.column", settings.get("variance.column").isPresent() ? List.of() : ColumnNames.SIGMA, where);
+            kind = ErrorKind.SIGMA;
+        }
+        if (err.isEmpty()) {
+            err = pick(names, settings, "variance.column", ColumnNames.VARIANCE, where);
+            kind = ErrorKind.VARIANCE;
+        }
+        maskCol = pick(names, settings, "mask.column", ColumnNames.MASK, where);
+        wave = pick(names, settings, "wavelength.column", ColumnNames.WAVELENGTH, where);
+        idCol = rowPerSpectrum ? pick(names, settings, "id.column", ColumnNames.ID, where) : Optional.empty();
+    }
+
+    private Spectrum finish(org.redward.spectrum.SpectralAxis axis, Header h, BinaryTable t, Keys keys, double[] f, double[] e,
+            double[] m, int row, String mediumSource) throws Exception {
         String fluxUnit = settings.get("flux.unit").orElseGet(() -> {
             String tu = h.getStringValue("TUNIT" + (flux.index() + 1));
             return tu != null && !tu.isBlank() ? tu.trim() : keys.text("BUNIT").orElse("");
         });
-        SpectrumMetadata md = own ? OwnFormat.readMetadata(h) : MetadataKeywords.read(keys, settings);
+        SpectrumMetadata md;
+        if (own) {
+            md = OwnFormat.readMetadata(h);
+        } else if (rowPerSpectrum) {
+            if (rowBaseMetadata == null) {
+                rowBaseMetadata = MetadataKeywords.read(keys, settings);
+            }
+            md = rowBaseMetadata;
+        } else {
+            md = MetadataKeywords.read(keys, settings);
+        }
         SpectrumMetadata.Builder b = own ? md.toBuilder() : md.toBuilder().extra("redward.medium_source", mediumSource);
         if (row >= 0 && !own) {
-            Optional<Column> id = pick(names, settings, "id.column", ColumnNames.ID, where);
-            if (id.isPresent()) {
-                Object v = t.getElement(row, id.get().index());
+            if (idCol.isPresent()) {
+                Object v = t.getElement(row, idCol.get().index());
                 String s = text(v);
                 if (!s.isBlank()) {
                     b.objectId(s);
@@ -260,7 +316,7 @@ final class TableSpectra implements Plan {
                 b.objectId(md.objectId().map(x -> x + "#").orElse("row ") + row);
             }
         }
-        return SpectrumAssembly.build(coords, unit, medium, sampling, f, e, kind, m, fluxUnit, b.build(),
+        return SpectrumAssembly.build(axis, f, e, kind, m, fluxUnit, b.build(),
                 settings.profile().map(p -> p.maskedRegionsVacuumAngstrom()).orElse(List.of()),
                 "column '" + flux.name() + "'", err.map(c -> "column '" + c.name() + "'").orElse(""),
                 maskCol.map(c -> "column '" + c.name() + "'").orElse(""));

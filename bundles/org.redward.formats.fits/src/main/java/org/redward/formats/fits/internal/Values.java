@@ -15,16 +15,21 @@ final class Values {
      *
      * @throws IllegalArgumentException if the array holds text or objects
      */
+    /** Float to double, element by element (kept small so that the JIT compiles it early). */
+    static double[] widen(float[] f) {
+        double[] out = new double[f.length];
+        for (int i = 0; i < f.length; i++) {
+            out[i] = f[i];
+        }
+        return out;
+    }
+
     static double[] toDoubles(Object raw, double scale, double zero, Long blank) {
         if (raw instanceof double[] d && scale == 1 && zero == 0) {
             return d.clone();
         }
         if (raw instanceof float[] f && scale == 1 && zero == 0) {
-            double[] out = new double[f.length];
-            for (int i = 0; i < f.length; i++) {
-                out[i] = f[i];
-            }
-            return out;
+            return widen(f);
         }
         if (raw == null || !raw.getClass().isArray()) {
             throw new IllegalArgumentException("not an array");

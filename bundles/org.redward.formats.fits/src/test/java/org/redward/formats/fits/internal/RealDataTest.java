@@ -13,7 +13,6 @@ import java.util.Optional;
 import org.junit.jupiter.api.Test;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.SpectrumRecord;
-import org.redward.api.formats.SpectrumSource;
 import org.redward.spectrum.AirVacuum;
 import org.redward.spectrum.Medium;
 import org.redward.spectrum.Spectrum;
@@ -65,13 +64,7 @@ class RealDataTest {
     }
 
     static List<SpectrumRecord> readAll(Path p, Optional<InstrumentProfile> profile) throws Exception {
-        List<SpectrumRecord> out = new ArrayList<>();
-        try (SpectrumSource s = new FitsReader().open(p, profile)) {
-            while (s.hasNext()) {
-                out.add(s.next());
-            }
-        }
-        return out;
+        return TestFiles.read(p, profile);
     }
 
     @Test
