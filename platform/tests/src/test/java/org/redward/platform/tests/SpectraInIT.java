@@ -28,7 +28,7 @@ class SpectraInIT {
         List<String> lines = r.out().lines().filter(l -> l.startsWith("{")).toList();
         assertEquals(12, lines.size(), r.toString());
         String all = String.join("\n", lines);
-        assertEquals(10, count(all, "\"profile\":\"sdss-coadd\""), all);
+        assertEquals(9, count(all, "\"profile\":\"sdss-coadd\""), all);
         assertEquals(2, count(all, "\"profile\":\"lamost-dr1\""), all);
         // spec-0266-51630-0168: 3808 pixels, 3824.7-9189.7 Angstrom vacuum (realdata truth.tsv)
         String one = lines.stream().filter(l -> l.contains("spec-0266-51630-0168")).findFirst().orElseThrow();
@@ -46,7 +46,8 @@ class SpectraInIT {
         assertEquals(1, r.status(), r.toString());
         List<String> lines = r.out().lines().filter(l -> l.startsWith("{")).toList();
         assertEquals(3, lines.size(), r.toString());
-        assertTrue(lines.get(0).contains("\"status\":\"failed\"") && lines.get(0).contains("broken.fits"), lines.get(0));
+        assertTrue(lines.get(0).contains("\"status\":\"failed\"") && lines.get(0).contains("broken.fits")
+                && lines.get(0).contains("HDU 0"), lines.get(0));
         assertTrue(lines.get(1).contains("file not found"), lines.get(1));
         assertTrue(lines.get(2).contains("\"status\":\"ok\"") && lines.get(2).contains("\"profile\":\"lamost-dr1\""), lines.get(2));
         assertTrue(!r.err().contains("Exception"), "no stack trace: " + r.err());

@@ -128,7 +128,7 @@ final class FitsFileView implements AutoCloseable {
                 list.add(h);
             }
             if (list.isEmpty()) {
-                throw new SpectrumReadException(file, "no HDU could be read");
+                throw new SpectrumReadException(file, "HDU 0: the primary header is damaged or cut short (not a readable FITS file)");
             }
             return new FitsFileView(file, tmp, fits, list, damage);
         } catch (SpectrumReadException e) {

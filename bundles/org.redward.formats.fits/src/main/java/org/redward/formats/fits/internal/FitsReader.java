@@ -31,6 +31,18 @@ import org.redward.api.registry.Provided;
         Provided.DESCRIPTION + "=FITS spectra: 1D images with a spectral WCS, binary tables (one or many spectra), 2D images of many spectra"})
 public final class FitsReader implements SpectrumReader {
 
+    /**
+     * nom-tam-fits reports damaged headers through java.util.logging as well as through its
+     * return values; this reader turns those into one clear error per file, so the library's
+     * own log lines (which would reach the user as warnings) are silenced. Held here so that the
+     * logger and its level are not garbage-collected.
+     */
+    private static final java.util.logging.Logger LIBRARY_LOG = java.util.logging.Logger.getLogger("nom.tam");
+
+    static {
+        LIBRARY_LOG.setLevel(java.util.logging.Level.OFF);
+    }
+
     /** How much of a file's start is searched for primary-header keywords when matching profiles. */
     private static final int MATCH_BYTES = 2880 * 20;
 
