@@ -33,6 +33,7 @@ class MultiObjectReadBenchmark {
 
     private static final int PIXELS = Integer.getInteger("redward.bench.pixels", 3000);
     private static final int SPECTRA = Integer.getInteger("redward.bench.spectra", 10_000);
+    private static final int ROUNDS = Integer.getInteger("redward.bench.rounds", 4);
 
     @Test
     void multiObjectFiles() throws Exception {
@@ -63,7 +64,8 @@ class MultiObjectReadBenchmark {
         double reader = Double.MAX_VALUE;
         long peak = 0;
         long peakLive = 0;
-        for (int round = 0; round < 2; round++) {
+        // best of ROUNDS: the first rounds run before the JIT has compiled the reading loops
+        for (int round = 0; round < ROUNDS; round++) {
             long t0 = System.nanoTime();
             plainRead(file);
             plain = Math.min(plain, (System.nanoTime() - t0) / 1e9);
