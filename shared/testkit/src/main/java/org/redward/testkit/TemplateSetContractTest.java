@@ -19,8 +19,9 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 
-import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
 import org.redward.api.templates.Template;
 import org.redward.api.templates.TemplateSet;
 import org.redward.api.templates.TemplateSets;
@@ -41,7 +42,11 @@ import org.redward.spectrum.ObjectClass;
  * see the same data. Vacuum wavelengths cannot be told from air ones in general: list known
  * features in {@link #expectedFeatures()} (with a tolerance finer than the 1.8 Angstrom
  * air-vacuum difference near H-alpha, where the sampling allows) to check them.
+ *
+ * <p>The set is created once for the class (and once more to check stability), since loading a
+ * large set can take a while.
  */
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
 public abstract class TemplateSetContractTest {
 
     /** A feature a template of a class must show: its peak (emission) or trough (absorption) within tolerance. */
@@ -59,7 +64,7 @@ public abstract class TemplateSetContractTest {
 
     private TemplateSet set;
 
-    @BeforeEach
+    @BeforeAll
     void create() throws Exception {
         set = createTemplateSet();
         assertNotNull(set, "createTemplateSet() returned null");
