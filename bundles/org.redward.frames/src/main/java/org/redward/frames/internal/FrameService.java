@@ -98,7 +98,7 @@ public final class FrameService implements FrameCorrector {
         double[] lb = SolarSystem.galactic(ra, dec);
         double vn = motion.projectedKmPerS(lb[0], lb[1]);
         double beta = motion.speedKmPerS() / C;
-        double factor = 1.0 / (Math.sqrt(1.0 - beta * beta) * (1.0 - vn / C));
+        double factor = Math.sqrt(1.0 - beta * beta) / (1.0 - vn / C);
         steps.add(new FrameStep(at, to, vn, factor, motion.citation() + String.format(Locale.ROOT,
                 "; source at l=%.4f, b=%.4f; (1+z) / (gamma(1 - V.n/c))", lb[0], lb[1])));
         if (to == Frame.LOCAL_GROUP) {
