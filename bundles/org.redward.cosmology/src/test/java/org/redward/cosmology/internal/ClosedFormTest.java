@@ -20,7 +20,7 @@ class ClosedFormTest {
         Cosmology c = new FlrwCosmology(CosmologyParameters.builder().h0(70).omegaMatter(1).flat().build());
         double dh = C / 70;
         for (double z : ZS) {
-            rel(2 * dh * (1 - 1 / Math.sqrt(1 + z)), c.comovingDistanceMpc(z), 1e-9, "EdS D_C(" + z + ")");
+            rel(2 * dh * z / (Math.sqrt(1 + z) * (1 + Math.sqrt(1 + z))), c.comovingDistanceMpc(z), 1e-9, "EdS D_C(" + z + ")");
             rel(2.0 / 3.0 * c.hubbleTimeGyr() * Math.pow(1 + z, -1.5), c.ageGyr(z), 1e-9, "EdS t(" + z + ")");
         }
     }
