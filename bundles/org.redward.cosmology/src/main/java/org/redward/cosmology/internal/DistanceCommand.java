@@ -147,7 +147,7 @@ public final class DistanceCommand implements Command {
                 zs.add(cosmo.redshiftAtLookbackTime(d));
             }
         } catch (InvalidCosmologyException e) {
-            throw new UsageException("--at-" + e.parameter().replace('_', '-') + ": " + e.getMessage());
+            throw new UsageException("--at-" + e.parameter().replace('_', '-') + ": " + bare(e));
         }
         if (zs.isEmpty()) {
             throw new UsageException("distance: give at least one redshift Z (or --at-comoving-mpc, --at-luminosity-mpc, --at-lookback-gyr); see --help");
@@ -205,6 +205,12 @@ public final class DistanceCommand implements Command {
             }
         }
         return 0;
+    }
+
+    /** The message without its leading "parameter: ". */
+    private static String bare(InvalidCosmologyException e) {
+        String m = e.getMessage();
+        return m.startsWith(e.parameter() + ": ") ? m.substring(e.parameter().length() + 2) : m;
     }
 
     static double parseZ(String s) {
@@ -281,7 +287,7 @@ public final class DistanceCommand implements Command {
         try {
             return b.build();
         } catch (InvalidCosmologyException e) {
-            throw new UsageException("--" + e.parameter().replace('_', '-') + ": " + e.getMessage());
+            throw new UsageException("--" + e.parameter().replace('_', '-') + ": " + bare(e));
         }
     }
 
@@ -365,8 +371,9 @@ public final class DistanceCommand implements Command {
 
     private static void header(PrintStream out, CosmologyParameters p) {
         out.printf(Locale.ROOT, "cosmology %s: H0 = %.4g km/s/Mpc, Omega_m = %.5g, Omega_de = %.5g (w0 = %.3g, wa = %.3g), "
-                + "Omega_k = %.3g, Omega_r = %.3g%n", p.name(), p.h0(), p.omegaMatter(), p.omegaDarkEnergy(), p.w0(), p.wa(),
-                p.omegaCurvature(), p.omegaRadiation());
+                + "Omega_k = %.3g, Omega_photons = %.3g, Omega_neutrinos = %.3g%s%n", p.name(), p.h0(), p.omegaMatter(),
+                p.omegaDarkEnergy(), p.w0(), p.wa(), p.omegaCurvature(), p.omegaPhotons(), p.omegaNeutrinos(),
+                p.massiveNeutrinos() ? " (massive: " + java.util.Arrays.toString(p.neutrinoMassesEv()) + " eV)" : "");
         out.println("  source: " + p.citation());
     }
 
@@ -461,7 +468,8 @@ public final class DistanceCommand implements Command {
         j.put("velocity_radio_km_s", VelocityConvention.RADIO.velocityKmPerS(d.z()));
         j.put("velocity_relativistic_km_s", VelocityConvention.RELATIVISTIC.velocityKmPerS(d.z()));
         j.put("cosmology", p.name()).put("h0_km_s_mpc", p.h0()).put("omega_m", p.omegaMatter())
-                .put("omega_de", p.omegaDarkEnergy()).put("omega_k", p.omegaCurvature()).put("omega_r", p.omegaRadiation())
+                .put("omega_de", p.omegaDarkEnergy()).put("omega_k", p.omegaCurvature()).put("omega_photons", p.omegaPhotons())
+                .put("omega_neutrinos", p.omegaNeutrinos()).put("neutrino_masses_ev", p.neutrinoMassesEv())
                 .put("w0", p.w0()).put("wa", p.wa()).put("cosmology_source", p.citation());
         if (fc != null) {
             List<Object> steps = new ArrayList<>();

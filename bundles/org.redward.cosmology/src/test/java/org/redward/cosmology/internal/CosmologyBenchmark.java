@@ -13,12 +13,14 @@ import org.redward.api.cosmology.DistanceColumns;
  * (accuracy measured against the closed forms of Einstein-de Sitter, de Sitter and Milne in the
  * same run), and a 1,000,000-row catalogue converted (every quantity) in under 2 seconds.
  *
- * <p>Run: {@code java -cp <classes>:<test-classes>:<api jar>:<commons-math3 jar>
- * org.redward.cosmology.internal.CosmologyBenchmark}.
+ * <p>Run: {@code mvn -B verify -Pbenchmarks} (every benchmark), or this class's {@code main}.
  */
 public final class CosmologyBenchmark {
 
-    private CosmologyBenchmark() {
+    /** Run by {@code mvn -B verify -Pbenchmarks}. */
+    @org.junit.jupiter.api.Test
+    void run() {
+        main(new String[0]);
     }
 
     public static void main(String[] args) {
@@ -40,7 +42,7 @@ public final class CosmologyBenchmark {
             worst = Math.max(worst, Math.abs(desitter.comovingDistanceMpc(zi) / (dh * zi) - 1));
             worst = Math.max(worst, Math.abs(milne.comovingDistanceMpc(zi) / (dh * Math.log1p(zi)) - 1));
         }
-        System.out.printf(Locale.ROOT, "accuracy: max relative error of D_C against EdS, de Sitter and Milne closed forms, 1e-9 < z < 5 (1 in 10 drawn log-uniform below 0.1): %.2e%n", worst);
+        System.out.printf(Locale.ROOT, "BENCHMARK cosmology: accuracy: max relative error of D_C against EdS, de Sitter and Milne closed forms, 1e-9 < z < 5 (1 in 10 drawn log-uniform below 0.1): %.2e%n", worst);
 
         Cosmology lcdm = new FlrwCosmology(CosmologyParameters.builder().h0(70).omegaMatter(0.3).flat().build());
         Cosmology planck = new FlrwCosmology(NamedSets.PLANCK2018);
@@ -55,7 +57,7 @@ public final class CosmologyBenchmark {
                 }
                 best = Math.min(best, (System.nanoTime() - t0) / 1e9);
             }
-            System.out.printf(Locale.ROOT, "comoving distance, %s: %.2f million evaluations/s on one thread (best of 5; checksum %.6e)%n",
+            System.out.printf(Locale.ROOT, "BENCHMARK cosmology: comoving distance, %s: %.2f million evaluations/s on one thread (best of 5; checksum %.6e)%n",
                     name, n / best / 1e6, sink);
         }
         for (Cosmology cos : new Cosmology[] {lcdm, planck}) {
@@ -68,7 +70,7 @@ public final class CosmologyBenchmark {
                 best = Math.min(best, (System.nanoTime() - t0) / 1e9);
                 rows = cols.size();
             }
-            System.out.printf(Locale.ROOT, "catalogue of %,d rows, every quantity (%d columns), %s: %.3f s (best of 3)%n",
+            System.out.printf(Locale.ROOT, "BENCHMARK cosmology: catalogue of %,d rows, every quantity (%d columns), %s: %.3f s (best of 3)%n",
                     rows, org.redward.api.cosmology.Quantity.values().length, name, best);
         }
         long t0 = 0;
@@ -78,7 +80,7 @@ public final class CosmologyBenchmark {
             }
             new FlrwCosmology(CosmologyParameters.builder().h0(60 + i * 0.001).omegaMatter(0.3).flat().cmbTemperatureK(2.7255).build());
         }
-        System.out.printf(Locale.ROOT, "building parameters and a cosmology (table of the integrals), warm: %.1f us each%n",
+        System.out.printf(Locale.ROOT, "BENCHMARK cosmology: building parameters and a cosmology (table of the integrals), warm: %.1f us each%n",
                 (System.nanoTime() - t0) / 1e3 / 1000);
     }
 }

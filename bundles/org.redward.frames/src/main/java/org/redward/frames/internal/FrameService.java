@@ -70,7 +70,7 @@ public final class FrameService implements FrameCorrector {
             boolean helio = to == Frame.HELIOCENTRIC;
             if (!Double.isFinite(m.midExposureMjdUtc())) {
                 notes.add("no exposure mid-point time: no " + (helio ? "heliocentric" : "barycentric")
-                        + " correction (up to 30 km/s); z stays topocentric");
+                        + " correction (up to 30 km/s); z stays topocentric (give the time, or the frame the redshift is already in)");
                 return new FrameCorrection(z, req, z, at, steps, notes);
             }
             SolarSystem.Velocity v = SolarSystem.observerVelocity(m.midExposureMjdUtc(), m.siteLongitudeDeg(),
