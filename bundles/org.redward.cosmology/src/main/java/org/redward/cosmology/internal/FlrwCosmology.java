@@ -235,30 +235,24 @@ final class FlrwCosmology implements Cosmology {
 
     /** Comoving distance in units of D_H; z unchecked. */
     private double dcUnit(double z) {
-        if (z < SMALL_Z) {
-            double[] out = new double[2];
-            smallZ(z, out);
-            return out[0];
-        }
-        double u = 1.0 / Math.sqrt(1.0 + z);
-        int i = node(z);
-        double a = uNode[i];
-        double b = uNode[i + 1];
-        return dcNode[i] - chebev(dcCheb, i, a, b, u);
+        return tabulated(z, 0, dcNode, dcCheb);
     }
 
     /** Lookback time in units of t_H; z unchecked. */
     private double tlUnit(double z) {
+        return tabulated(z, 1, tlNode, tlCheb);
+    }
+
+    /** One tabulated integral from z to 0 (which = 0 comoving, 1 lookback). */
+    private double tabulated(double z, int which, double[] nodes, double[] cheb) {
         if (z < SMALL_Z) {
             double[] out = new double[2];
             smallZ(z, out);
-            return out[1];
+            return out[which];
         }
         double u = 1.0 / Math.sqrt(1.0 + z);
         int i = node(z);
-        double a = uNode[i];
-        double b = uNode[i + 1];
-        return tlNode[i] - chebev(tlCheb, i, a, b, u);
+        return nodes[i] - chebev(cheb, i, uNode[i], uNode[i + 1], u);
     }
 
     private int node(double z) {

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.Reader;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
 import java.util.Properties;
 import java.util.Set;
@@ -66,32 +67,21 @@ final class ParameterFile {
         CosmologyParameters.Builder b = base.toBuilder().name(kv.getOrDefault("name", file.getFileName().toString()))
                 .citation(kv.getOrDefault("citation", "read from " + file + " (based on " + base.name() + ")"));
         try {
-            if (kv.containsKey("h0")) {
-                b.h0(number(file, kv, "h0")).sigmaH0(0);
-            }
-            if (kv.containsKey("omega_m")) {
-                b.omegaMatter(number(file, kv, "omega_m")).sigmaOmegaMatter(0);
-            }
-            if (kv.containsKey("omega_lambda")) {
-                b.omegaDarkEnergy(number(file, kv, "omega_lambda"));
-            }
-            if (kv.containsKey("w0")) {
-                b.w0(number(file, kv, "w0"));
-            }
-            if (kv.containsKey("wa")) {
-                b.wa(number(file, kv, "wa"));
-            }
-            if (kv.containsKey("t_cmb")) {
-                b.cmbTemperatureK(number(file, kv, "t_cmb"));
-            }
-            if (kv.containsKey("n_eff")) {
-                b.effectiveNeutrinoSpecies(number(file, kv, "n_eff"));
-            }
-            if (kv.containsKey("sigma_h0")) {
-                b.sigmaH0(number(file, kv, "sigma_h0"));
-            }
-            if (kv.containsKey("sigma_omega_m")) {
-                b.sigmaOmegaMatter(number(file, kv, "sigma_omega_m"));
+            Map<String, java.util.function.ObjDoubleConsumer<CosmologyParameters.Builder>> setters = new TreeMap<>();
+            setters.put("h0", (x, v) -> x.h0(v).sigmaH0(0));
+            setters.put("omega_m", (x, v) -> x.omegaMatter(v).sigmaOmegaMatter(0));
+            setters.put("omega_lambda", CosmologyParameters.Builder::omegaDarkEnergy);
+            setters.put("w0", CosmologyParameters.Builder::w0);
+            setters.put("wa", CosmologyParameters.Builder::wa);
+            setters.put("t_cmb", CosmologyParameters.Builder::cmbTemperatureK);
+            setters.put("n_eff", CosmologyParameters.Builder::effectiveNeutrinoSpecies);
+            setters.put("sigma_h0", CosmologyParameters.Builder::sigmaH0);
+            setters.put("sigma_omega_m", CosmologyParameters.Builder::sigmaOmegaMatter);
+            // h0 and omega_m first: they reset the base's uncertainties, which sigma_* may then set.
+            for (String key : List.of("h0", "omega_m", "omega_lambda", "w0", "wa", "t_cmb", "n_eff", "sigma_h0", "sigma_omega_m")) {
+                if (kv.containsKey(key)) {
+                    setters.get(key).accept(b, number(file, kv, key));
+                }
             }
             return b.build();
         } catch (InvalidCosmologyException e) {
