@@ -67,7 +67,7 @@ public final class DistanceCommand implements Command {
         boolean json;
         @Option(names = "--cosmology", paramLabel = "ID", description = "named parameter set (default planck2018)")
         String cosmology;
-        @Option(names = "--config", paramLabel = "FILE", description = "key = value file: base, name, citation, h0, omega_m, omega_lambda, w0, wa, t_cmb, n_eff, sigma_h0, sigma_omega_m")
+        @Option(names = "--config", paramLabel = "FILE", description = "key = value file: base, name, citation, h0, omega_m, omega_lambda, w0, wa, t_cmb, n_eff, m_nu, sigma_h0, sigma_omega_m")
         Path config;
         @Option(names = "--h0", paramLabel = "KM_S_MPC", description = "Hubble constant, km/s/Mpc")
         Double h0;
@@ -81,8 +81,10 @@ public final class DistanceCommand implements Command {
         Double wa;
         @Option(names = "--t-cmb", paramLabel = "K", description = "CMB temperature (0: no radiation)")
         Double tCmb;
-        @Option(names = "--n-eff", paramLabel = "N", description = "effective number of massless neutrino species")
+        @Option(names = "--n-eff", paramLabel = "N", description = "effective number of neutrino species (shared by three species)")
         Double nEff;
+        @Option(names = "--m-nu", paramLabel = "EV[,EV...]", split = ",", description = "masses of up to three massive neutrinos, eV (0: all massless)")
+        double[] mNu;
         @Option(names = "--sigma-h0", paramLabel = "KM_S_MPC", description = "uncertainty of H0 for the error budget")
         Double sigmaH0;
         @Option(names = "--sigma-omega-m", paramLabel = "X", description = "uncertainty of omega_m for the error budget")
@@ -181,6 +183,11 @@ public final class DistanceCommand implements Command {
             DistanceUncertainty ul = cosmo.uncertainty(Quantity.LUMINOSITY_MPC, z, a.sigmaZ, a.peculiarVelocity);
             DistanceUncertainty um = cosmo.uncertainty(Quantity.DISTANCE_MODULUS_MAG, z, a.sigmaZ, a.peculiarVelocity);
             List<String> rowWarnings = new ArrayList<>(d.warnings());
+            if (fc == null && z > 0 && z < 0.1) {
+                rowWarnings.add(String.format(Locale.ROOT, "z=%s is used as given, in no stated frame: the Sun's motion "
+                        + "against the CMB (369.82 km/s) can change cz by up to %.1f%% here; give --frame cmb with --ra/--dec "
+                        + "(and --mjd/--site for a topocentric z)", g(z), 100 * 369.82 / (CosmologyParameters.SPEED_OF_LIGHT_KM_PER_S * z)));
+            }
             if (fc != null && !fc.complete()) {
                 rowWarnings.add("z=" + zIn + ": " + frameRequest.to().key() + " frame not reached (" + String.join("; ", fc.notes())
                         + "); distances use the " + fc.reached().key() + " redshift");
@@ -274,6 +281,11 @@ public final class DistanceCommand implements Command {
         if (a.nEff != null) {
             b.effectiveNeutrinoSpecies(a.nEff);
             changed.add("n_eff=" + a.nEff);
+        }
+        if (a.mNu != null) {
+            double[] m = java.util.Arrays.stream(a.mNu).filter(x -> x != 0).toArray();
+            b.neutrinoMassesEv(m);
+            changed.add("m_nu=" + java.util.Arrays.toString(a.mNu));
         }
         if (a.sigmaH0 != null) {
             b.sigmaH0(a.sigmaH0);

@@ -31,6 +31,7 @@ import org.redward.api.cosmology.InvalidCosmologyException;
  * wa = 0
  * t_cmb = 2.7255          # K; 0 means no radiation
  * n_eff = 3.046
+ * m_nu = 0.06            # eV, comma-separated, up to three; 0 for all massless
  * sigma_h0 = 1.0
  * sigma_omega_m = 0.01
  * </pre>
@@ -38,7 +39,7 @@ import org.redward.api.cosmology.InvalidCosmologyException;
 final class ParameterFile {
 
     static final Set<String> KEYS = Set.of("base", "name", "citation", "h0", "omega_m", "omega_lambda", "w0", "wa",
-            "t_cmb", "n_eff", "sigma_h0", "sigma_omega_m");
+            "t_cmb", "n_eff", "m_nu", "sigma_h0", "sigma_omega_m");
 
     private ParameterFile() {
     }
@@ -82,6 +83,18 @@ final class ParameterFile {
                 if (kv.containsKey(key)) {
                     setters.get(key).accept(b, number(file, kv, key));
                 }
+            }
+            if (kv.containsKey("m_nu")) {
+                String[] parts = kv.get("m_nu").split(",");
+                double[] m = new double[parts.length];
+                for (int i = 0; i < parts.length; i++) {
+                    try {
+                        m[i] = Double.parseDouble(parts[i].trim());
+                    } catch (NumberFormatException e) {
+                        throw new UsageException("--config " + file + ": m_nu = '" + kv.get("m_nu") + "' is not a list of numbers");
+                    }
+                }
+                b.neutrinoMassesEv(java.util.Arrays.stream(m).filter(x -> x != 0).toArray());
             }
             return b.build();
         } catch (InvalidCosmologyException e) {
