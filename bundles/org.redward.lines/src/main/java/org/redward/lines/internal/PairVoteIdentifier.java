@@ -138,6 +138,10 @@ public final class PairVoteIdentifier implements LineIdentifier {
                     warnings.add(String.format(Locale.ROOT, "another redshift explains the lines almost as well: z = %.5f (%d lines, score %.1f against %.1f)",
                             r2.z(), r2.matchedCount(), r2.score(), best.score()));
                 }
+                if (best.matchedCount() == 2) {
+                    warnings.add(String.format(Locale.ROOT, "the redshift rests on two lines only (%s and %s): check it by eye",
+                            best.matches().get(0).line().name(), best.matches().get(1).line().name()));
+                }
                 int unexplained = lines.size() - best.matchedCount();
                 if (unexplained > best.matchedCount()) {
                     warnings.add(String.format(Locale.ROOT, "%d of the %d detected lines are not explained at z = %.5f", unexplained, lines.size(), best.z()));
