@@ -1,15 +1,11 @@
 package org.redward.lines.internal;
 
-import java.io.IOException;
-import java.io.InputStream;
 import java.io.PrintStream;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import java.util.zip.GZIPInputStream;
 
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
@@ -19,11 +15,9 @@ import org.redward.api.commands.Json;
 import org.redward.api.commands.UsageException;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.ProfileRegistry;
-import org.redward.api.formats.ReaderRegistry;
-import org.redward.api.formats.SpectrumReadException;
-import org.redward.api.formats.SpectrumReader;
+import org.redward.api.formats.ReadOptions;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.formats.SpectrumRecord;
-import org.redward.api.formats.SpectrumSource;
 import org.redward.api.lines.DetectedLine;
 import org.redward.api.lines.FinderSettings;
 import org.redward.api.lines.IdentifySettings;
@@ -48,7 +42,7 @@ import picocli.CommandLine.Parameters;
 public final class LinesCommand implements Command {
 
     @Reference
-    ReaderRegistry readers;
+    SpectrumInputs inputs;
 
     @Reference
     LineListRegistry lists;
@@ -64,7 +58,7 @@ public final class LinesCommand implements Command {
                     + "equivalent width, S/N, with errors from the fit) and identify them with a line list.",
                     "Without --z, the redshift that explains the most lines is adopted; with --z, the lines are labelled at that z."})
     static final class Args {
-        @Parameters(arity = "1..*", paramLabel = "FILE", description = "spectrum files")
+        @Parameters(arity = "1..*", paramLabel = "FILE", description = "spectrum files, folders or list files")
         List<Path> files = new ArrayList<>();
         @Option(names = "--z", paramLabel = "Z", description = "label the lines at this known redshift instead of searching")
         Double z;
@@ -74,8 +68,10 @@ public final class LinesCommand implements Command {
         String kind = "both";
         @Option(names = "--list", paramLabel = "ID", description = "line list id (default ${DEFAULT-VALUE})")
         String list = LineListRegistry.STANDARD;
-        @Option(names = "--profile", paramLabel = "ID", description = "instrument profile: its layout settings and masked regions")
+        @Option(names = "--profile", paramLabel = "ID", description = "force this instrument profile (default: the best match); its masked regions are masked")
         String profile;
+        @Option(names = "--reader", paramLabel = "ID", description = "force this reader (default: chosen by sniffing)")
+        String reader;
         @Option(names = "--mask", paramLabel = "FROM:TO", description = "mask this observed vacuum wavelength range, Angstrom (repeatable)")
         List<String> masks = new ArrayList<>();
         @Option(names = "--z-range", paramLabel = "MIN:MAX", description = "redshift range to search (default -0.005:7)")
@@ -96,13 +92,8 @@ public final class LinesCommand implements Command {
             return 0;
         }
         FinderSettings fs = finderSettings(a);
-        Optional<InstrumentProfile> profile = Optional.empty();
         if (a.profile != null) {
-            InstrumentProfile p = requireProvider(profiles.find(a.profile), "--profile", a.profile, profiles.ids());
-            profile = Optional.of(p);
-            List<double[]> m = new ArrayList<>(fs.maskedRegionsVacuumAngstrom());
-            m.addAll(p.maskedRegionsVacuumAngstrom());
-            fs = fs.withMaskedRegions(m);
+            requireProvider(profiles.find(a.profile), "--profile", a.profile, profiles.ids());
         }
         IdentifySettings is = identifySettings(a);
         LineList list = lists.find(a.list).map(Provided::service).orElse(null);
@@ -112,12 +103,41 @@ public final class LinesCommand implements Command {
             }
             list = LineListFile.standard();
         }
+        List<Path> paths = new ArrayList<>();
+        for (Path p : a.files) {
+            paths.add(ctx.workingDirectory().resolve(p));
+        }
+        ReadOptions ro = ReadOptions.defaults().withProfile(a.profile).withReader(a.reader);
         int failures = 0;
-        for (Path given : a.files) {
-            Path file = ctx.workingDirectory().resolve(given);
-            failures += file(ctx, a, file, profile, fs, is, list);
+        try (SpectrumInputs.Stream stream = inputs.open(paths, ro)) {
+            while (stream.hasNext()) {
+                SpectrumRecord rec = stream.next();
+                if (!rec.ok()) {
+                    ctx.err().println("redward lines: " + rec.error());
+                    failures++;
+                    continue;
+                }
+                if (a.only != null && rec.index() != a.only) {
+                    continue;
+                }
+                spectrum(ctx, a, rec.file(), rec.index(), rec.spectrum().get(), withProfileMasks(fs, rec.profile()), is, list);
+            }
         }
         return failures == 0 ? 0 : 1;
+    }
+
+    /** The settings plus the masked regions of the instrument profile the reader applied, if any. */
+    private FinderSettings withProfileMasks(FinderSettings fs, String profileId) {
+        if (profileId == null || profileId.isEmpty()) {
+            return fs;
+        }
+        Optional<Provided<InstrumentProfile>> p = profiles.find(profileId);
+        if (p.isEmpty() || p.get().service().maskedRegionsVacuumAngstrom().isEmpty()) {
+            return fs;
+        }
+        List<double[]> m = new ArrayList<>(fs.maskedRegionsVacuumAngstrom());
+        m.addAll(p.get().service().maskedRegionsVacuumAngstrom());
+        return fs.withMaskedRegions(m);
     }
 
     private static <T> T requireProvider(Optional<Provided<T>> p, String option, String id, List<String> ids) {
@@ -175,82 +195,6 @@ public final class LinesCommand implements Command {
             // reported below
         }
         throw new UsageException(option + ": '" + text + "' is not FROM:TO with FROM < TO");
-    }
-
-    /** @return the number of spectra (or files) that failed */
-    private int file(CommandContext ctx, Args a, Path file, Optional<InstrumentProfile> profile, FinderSettings fs,
-            IdentifySettings is, LineList list) {
-        if (!Files.isRegularFile(file)) {
-            ctx.err().println("redward lines: " + file + ": no such file");
-            return 1;
-        }
-        SpectrumReader reader;
-        try {
-            reader = chooseReader(file);
-        } catch (IOException e) {
-            ctx.err().println("redward lines: " + file + ": " + e.getMessage());
-            return 1;
-        }
-        if (reader == null) {
-            ctx.err().println("redward lines: " + file + ": no installed reader understands this file (readers: "
-                    + (readers.ids().isEmpty() ? "none" : String.join(", ", readers.ids())) + ")");
-            return 1;
-        }
-        int failures = 0;
-        try (SpectrumSource src = reader.open(file, profile)) {
-            while (src.hasNext()) {
-                SpectrumRecord rec = src.next();
-                if (a.only != null && rec.index() != a.only) {
-                    continue;
-                }
-                if (!rec.ok()) {
-                    ctx.err().println("redward lines: " + rec.error());
-                    failures++;
-                    continue;
-                }
-                spectrum(ctx, a, file, rec.index(), rec.spectrum().get(), fs, is, list);
-            }
-        } catch (SpectrumReadException e) {
-            ctx.err().println("redward lines: " + e.getMessage());
-            return failures + 1;
-        } catch (IOException e) {
-            ctx.err().println("redward lines: " + file + ": " + e.getMessage());
-            return failures + 1;
-        }
-        return failures;
-    }
-
-    private SpectrumReader chooseReader(Path file) throws IOException {
-        byte[] head = head(file);
-        SpectrumReader best = null;
-        int bestScore = 0;
-        for (Provided<SpectrumReader> p : readers.providers()) {
-            int s;
-            try {
-                s = p.service().sniff(file, head);
-            } catch (RuntimeException e) {
-                s = 0;
-            }
-            if (s > bestScore) {
-                bestScore = s;
-                best = p.service();
-            }
-        }
-        return best;
-    }
-
-    /** Up to the first 8640 bytes, decompressed if the file is gzip. */
-    static byte[] head(Path file) throws IOException {
-        byte[] raw;
-        try (InputStream in = Files.newInputStream(file)) {
-            raw = in.readNBytes(8640);
-        }
-        if (raw.length >= 2 && (raw[0] & 0xff) == 0x1f && (raw[1] & 0xff) == 0x8b) {
-            try (InputStream in = new GZIPInputStream(Files.newInputStream(file))) {
-                return in.readNBytes(8640);
-            }
-        }
-        return raw;
     }
 
     void spectrum(CommandContext ctx, Args a, Path file, int index, Spectrum s, FinderSettings fs, IdentifySettings is, LineList list) {

@@ -7,10 +7,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.ByteArrayOutputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 
 import org.junit.jupiter.api.Test;
 import org.redward.api.commands.CommandContext;
@@ -18,16 +19,15 @@ import org.redward.api.commands.Progress;
 import org.redward.api.commands.UsageException;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.ProfileRegistry;
-import org.redward.api.formats.ReaderRegistry;
-import org.redward.api.formats.SpectrumReader;
+import org.redward.api.formats.ReadOptions;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.formats.SpectrumRecord;
-import org.redward.api.formats.SpectrumSource;
 import org.redward.api.lines.LineList;
 import org.redward.api.lines.LineListRegistry;
 import org.redward.api.registry.Provided;
 
 /**
- * The lines command end to end (without a framework): a test reader over the real SDSS spectrum
+ * The lines command end to end (without a framework): a test reading facade over the real SDSS spectrum
  * spec-0266-51630-0168 (SDSS public data release; published z 0.06740563 in truth.tsv).
  */
 class LinesCommandTest {
@@ -37,40 +37,40 @@ class LinesCommandTest {
 
     private LinesCommand command() {
         LinesCommand c = new LinesCommand();
-        SpectrumReader reader = new SpectrumReader() {
+        c.inputs = new SpectrumInputs() {
             @Override
-            public int sniff(Path file, byte[] head) {
-                return file.getFileName().toString().endsWith(".fits") ? 50 : 0;
-            }
+            public Stream open(List<Path> inputs, ReadOptions options) {
+                Iterator<Path> it = inputs.iterator();
+                return new Stream() {
+                    int done;
 
-            @Override
-            public SpectrumSource open(Path file, Optional<InstrumentProfile> profile) {
-                return new SpectrumSource() {
-                    boolean done;
-
-                    @Override public String layout() { return "test"; }
-                    @Override public long count() { return 1; }
-                    @Override public boolean hasNext() { return !done; }
+                    @Override public boolean hasNext() { return it.hasNext(); }
                     @Override public SpectrumRecord next() {
-                        done = true;
+                        Path file = it.next();
+                        done++;
+                        if (!Files.isRegularFile(file)) {
+                            return SpectrumRecord.failed(file, -1, "", file + ": no such file");
+                        }
                         try {
                             return SpectrumRecord.ok(file, 0, "HDU 1", RealSpectra.read(file.getFileName().toString()));
                         } catch (Exception e) {
                             return SpectrumRecord.failed(file, 0, "HDU 1", e.toString());
                         }
                     }
+                    @Override public int filesDone() { return done; }
+                    @Override public int files() { return inputs.size(); }
                     @Override public void close() { }
                 };
             }
+
+            @Override
+            public List<Path> expand(List<Path> inputs) {
+                return inputs;
+            }
         };
-        c.readers = new Readers(List.of(Provided.of("test-sdss", reader, "test", "0", "", Map.of())));
         c.lists = new Lists(List.of(Provided.of("standard", LineListFile.standard(), "test", "0", "", Map.of())));
         c.profiles = new Profiles(List.of());
         return c;
-    }
-
-    record Readers(List<Provided<SpectrumReader>> providers) implements ReaderRegistry {
-        @Override public String family() { return FAMILY; }
     }
 
     record Lists(List<Provided<LineList>> providers) implements LineListRegistry {
@@ -139,7 +139,7 @@ class LinesCommandTest {
     @Test
     void missingFileIsReportedNotThrown() throws Exception {
         assertEquals(1, command().run(ctx(), List.of("/nonexistent/a.fits")));
-        assertTrue(err.toString(StandardCharsets.UTF_8).contains("no such file"));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("no such file"), err.toString(StandardCharsets.UTF_8));
     }
 
 }
