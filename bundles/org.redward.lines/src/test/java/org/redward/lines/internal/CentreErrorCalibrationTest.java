@@ -14,7 +14,7 @@ import org.redward.spectrum.SpectralAxis;
 /**
  * Error calibration: for Gaussian noise of known variance, a fitted parameter lies within its
  * 1-sigma error of the truth 68.27% of the time (normal distribution; common practice). The whole
- * finder (continuum, detection, fit) runs on 4,000 invented noise realisations of one Gaussian line.
+ * finder (continuum, detection, fit) runs on 2,000 invented noise realisations of one Gaussian line.
  */
 class CentreErrorCalibrationTest {
 
@@ -24,7 +24,7 @@ class CentreErrorCalibrationTest {
         double centre = 5600.0;
         Random rnd = new Random(20261201L);
         MatchedFilterFinder finder = new MatchedFilterFinder();
-        int trials = 4000;
+        int trials = 2000;
         int inside = 0;
         int fluxInside = 0;
         int found = 0;
