@@ -1,0 +1,2 @@
+/** Fourier cross-correlation estimator (internal). */
+package org.redward.redshift.xcorr.internal;
