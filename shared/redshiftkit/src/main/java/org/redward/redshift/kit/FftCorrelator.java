@@ -87,6 +87,19 @@ public final class FftCorrelator {
         return s / n;
     }
 
+    /**
+     * The smallest power-of-two FFT length at which the circular correlation of a signal of
+     * {@code signalPixels} with one of {@code templatePixels} equals the linear one at every lag in
+     * [kLo, kHi]: the lags free of wrap-around are [signalPixels - n, n - templatePixels].
+     */
+    public static int lengthFor(int signalPixels, int templatePixels, int kLo, int kHi) {
+        int n = Stats.nextPowerOfTwo(Math.max(signalPixels, templatePixels) + 1);
+        while (kLo < signalPixels - n || kHi > n - templatePixels) {
+            n <<= 1;
+        }
+        return n;
+    }
+
     /** Inverse of {@link #forward} (in a new array). */
     public static double[] inverse(double[] aHat) {
         double[] a = aHat.clone();

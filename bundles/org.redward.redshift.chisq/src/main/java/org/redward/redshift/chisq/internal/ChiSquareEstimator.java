@@ -28,6 +28,7 @@ import org.redward.redshift.kit.Params;
 import org.redward.redshift.kit.Peaks;
 import org.redward.redshift.kit.Provenance;
 import org.redward.redshift.kit.SearchRanges;
+import org.redward.redshift.kit.Shifts;
 import org.redward.redshift.kit.TemplateBank;
 import org.redward.spectrum.ObjectClass;
 import org.redward.spectrum.Spectrum;
@@ -65,7 +66,6 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
 
     public static final String ID = "chisq";
     static final double LOG10_STEP = 1e-4;
-    static final double LN10 = Math.log(10.0);
     static final double C_KM_S = 299_792.458;
     /** Alternatives closer than this (km/s) to a better one are the same solution. */
     static final double DISTINCT_KM_S = 1000.0;
@@ -109,7 +109,7 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
 
     private record Candidate(BasisGroup group, ChiSquareScan.Curve curve, int index, double chi2, double criterion) {
         double z() {
-            return Math.pow(10.0, (curve.shiftLo() + index) * LOG10_STEP) - 1;
+            return Shifts.z(curve.shiftLo() + index, LOG10_STEP);
         }
     }
 
@@ -165,20 +165,13 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
         List<Candidate> candidates = new ArrayList<>();
         double lnN = Math.log(gs.usablePixels);
         for (BasisGroup g : prep.groups()) {
-            double[] range = SearchRanges.of(g.objectClass, ctx);
-            if (!(range[0] < range[1]) || range[0] <= -1) {
-                continue;
-            }
-            long shiftLo = (long) Math.ceil(Math.log10(1 + range[0]) / LOG10_STEP);
-            long shiftHi = (long) Math.floor(Math.log10(1 + range[1]) / LOG10_STEP);
             long offset = gs.startIndex - g.startIndex;
-            // only shifts with any overlap between spectrum and template
-            shiftLo = Math.max(shiftLo, offset - g.length + 1);
-            shiftHi = Math.min(shiftHi, offset + gs.size() - 1);
+            long[] shifts = Shifts.range(SearchRanges.of(g.objectClass, ctx), gs.startIndex, gs.size(), g.startIndex, g.length, LOG10_STEP);
+            long shiftLo = shifts[0], shiftHi = shifts[1];
             if (shiftLo > shiftHi) {
                 continue;
             }
-            int n = ChiSquareScan.fftLength(gs.size(), g.length, (int) (shiftLo - offset), (int) (shiftHi - offset));
+            int n = FftCorrelator.lengthFor(gs.size(), g.length, (int) (shiftLo - offset), (int) (shiftHi - offset));
             ChiSquareScan.SpectrumSide side = sides.computeIfAbsent(n, nn -> new ChiSquareScan.SpectrumSide(gs, polyTerms, nn));
             BasisGroup.Prepared tp = transforms.get(set.checksum() + "|" + g.name + "|" + n, k -> g.prepare(n));
             ChiSquareScan.Curve c = ChiSquareScan.scan(gs, side, g, tp, shiftLo, shiftHi, minCoverage);
@@ -205,7 +198,7 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
         for (Candidate c : candidates) {
             boolean same = false;
             for (Candidate d : distinct) {
-                if (Math.abs(c.z() - d.z()) / (1 + d.z()) * C_KM_S < DISTINCT_KM_S) {
+                if (Shifts.same(c.z(), d.z(), DISTINCT_KM_S)) {
                     same = true;
                     break;
                 }
@@ -271,11 +264,10 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
             y[i] = -y[i];
         }
         double[] v = Peaks.parabola(y, c.index(), 0, y.length - 1);
-        double shift = c.curve().shiftLo() + c.index() + v[0];
-        double z = Math.pow(10.0, shift * LOG10_STEP) - 1;
+        double z = Shifts.z(c.curve().shiftLo() + c.index() + v[0], LOG10_STEP);
         double curvature = -v[2];
         double sigmaPixels = curvature > 0 ? Math.sqrt(2.0 / curvature) : 1.0;
-        return new double[] {z, (1 + z) * LN10 * LOG10_STEP * sigmaPixels};
+        return new double[] {z, Shifts.zError(z, sigmaPixels, LOG10_STEP)};
     }
 
     private static String subclass(GriddedSpectrum gs, Candidate c, int polyTerms) {
@@ -337,7 +329,7 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
     private static ScoreCurve curveOf(ChiSquareScan.Curve c) {
         double[] z = new double[c.chi2().length];
         for (int i = 0; i < z.length; i++) {
-            z[i] = Math.pow(10.0, (c.shiftLo() + i) * LOG10_STEP) - 1;
+            z[i] = Shifts.z(c.shiftLo() + i, LOG10_STEP);
         }
         return new ScoreCurve(z, c.chi2(), "chi2", true);
     }

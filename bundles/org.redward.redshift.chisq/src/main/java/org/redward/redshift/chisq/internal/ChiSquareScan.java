@@ -4,7 +4,6 @@ import java.util.Arrays;
 
 import org.redward.redshift.kit.FftCorrelator;
 import org.redward.redshift.kit.GriddedSpectrum;
-import org.redward.redshift.kit.Stats;
 
 /**
  * The chi-square of the best fit of {@code sum_j a_j T_j(lambda/(1+z)) + sum_a b_a P_a(x)} to a
@@ -96,15 +95,6 @@ final class ChiSquareScan {
             }
         }
         return p;
-    }
-
-    /** The smallest power-of-two FFT length for which every lag in [kLo, kHi] is free of wrap-around. */
-    static int fftLength(int spectrumPixels, int templatePixels, int kLo, int kHi) {
-        int n = Stats.nextPowerOfTwo(Math.max(spectrumPixels, templatePixels) + 1);
-        while (kLo < spectrumPixels - n || kHi > n - templatePixels) {
-            n <<= 1;
-        }
-        return n;
     }
 
     /** Result of a scan: chi2 per shift K in [kShiftLo, kShiftLo + chi2.length). */

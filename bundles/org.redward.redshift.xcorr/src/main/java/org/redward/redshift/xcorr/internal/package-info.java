@@ -1,2 +1,0 @@
-/** Fourier cross-correlation estimator (internal). */
-package org.redward.redshift.xcorr.internal;
