@@ -7,9 +7,12 @@ import org.redward.spectrum.ObjectClass;
 
 /**
  * The redshift range searched for each class: the context's range intersected with what the
- * class allows. Defaults: galaxies -0.005 to 1.6, quasars 0 to the context maximum, stars
- * |v| up to 1,200 km/s (|z| < 0.004: galactic stars move at a few hundred km/s at most, common
- * practice). Parameters {@code galaxy_z_max}, {@code star_v_max_km_s} override them.
+ * class allows. Defaults: galaxies 0.001 (cz = 300 km/s) to 1.6, quasars 0 to the context
+ * maximum, stars |v| up to 1,200 km/s (|z| < 0.004: galactic stars move at a few hundred km/s at
+ * most, common practice). The galaxy floor keeps a star's spectrum at rest from being taken for
+ * a galaxy at z = 0 (a combination of galaxy templates can mimic a star); lower it with
+ * {@code galaxy_z_min} for very nearby galaxies. Parameters {@code galaxy_z_min},
+ * {@code galaxy_z_max}, {@code star_v_max_km_s} override the defaults.
  */
 public final class SearchRanges {
 
@@ -32,7 +35,7 @@ public final class SearchRanges {
                 hi = Double.POSITIVE_INFINITY;
             }
             default -> {
-                lo = -0.005;
+                lo = Params.number(p, "galaxy_z_min", 0.001);
                 hi = Params.number(p, "galaxy_z_max", 1.6);
             }
         }

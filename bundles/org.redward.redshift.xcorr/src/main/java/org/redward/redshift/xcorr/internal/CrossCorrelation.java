@@ -27,7 +27,7 @@ import org.redward.redshift.kit.Stats;
  */
 final class CrossCorrelation {
 
-    static final int CONTINUUM_BOX = 251;
+    static final int CONTINUUM_BOX = 401;
     static final double APODISE_FRACTION = 0.05;
 
     private CrossCorrelation() {
@@ -71,7 +71,7 @@ final class CrossCorrelation {
 
     /** The band-pass filter for FFT length n, values for wavenumbers 0..n/2. */
     static double[] bandPass(int n) {
-        double k1 = n / 400.0, k2 = n / 200.0, k3 = n / 5.0, k4 = n / 3.0;
+        double k1 = n / 800.0, k2 = n / 400.0, k3 = n / 5.0, k4 = n / 3.0;
         double[] h = new double[n / 2 + 1];
         for (int k = 0; k <= n / 2; k++) {
             double v;
