@@ -10,10 +10,18 @@ public final class SimpleTemplateSet implements TemplateSet {
 
     private final String id;
     private final List<Template> templates;
+    private final String checksum;
 
     public SimpleTemplateSet(String id, List<Template> templates) {
         this.id = id;
         this.templates = List.copyOf(templates);
+        long h = id.hashCode();
+        for (Template t : this.templates) {
+            h = h * 31 + t.id().hashCode();
+            h = h * 31 + java.util.Arrays.hashCode(t.flux());
+            h = h * 31 + java.util.Arrays.hashCode(t.restVacuumAngstrom());
+        }
+        this.checksum = String.format("%064x", h & Long.MAX_VALUE);
     }
 
     @Override
@@ -28,13 +36,7 @@ public final class SimpleTemplateSet implements TemplateSet {
 
     @Override
     public String checksum() {
-        long h = id.hashCode();
-        for (Template t : templates) {
-            h = h * 31 + t.id().hashCode();
-            h = h * 31 + java.util.Arrays.hashCode(t.flux());
-            h = h * 31 + java.util.Arrays.hashCode(t.restVacuumAngstrom());
-        }
-        return String.format("%064x", h & Long.MAX_VALUE);
+        return checksum;
     }
 
     @Override

@@ -153,7 +153,8 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
         if (gs == null || gs.usablePixels < 20) {
             return failed("no usable pixels (fewer than 20 unmasked pixels with finite flux and positive inverse variance)", provenance);
         }
-        Prepared prep = banks.get(set.id() + "|" + set.version() + "|" + set.checksum(),
+        String checksum = set.checksum();
+        Prepared prep = banks.get(set.id() + "|" + set.version() + "|" + checksum,
                 k -> Prepared.of(set));
         if (prep.groups().isEmpty()) {
             return failed("template set " + set.id() + " has no usable template" + (prep.bank().rejected.isEmpty() ? ""
@@ -173,7 +174,7 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
             }
             int n = FftCorrelator.lengthFor(gs.size(), g.length, (int) (shiftLo - offset), (int) (shiftHi - offset));
             ChiSquareScan.SpectrumSide side = sides.computeIfAbsent(n, nn -> new ChiSquareScan.SpectrumSide(gs, polyTerms, nn));
-            BasisGroup.Prepared tp = transforms.get(set.checksum() + "|" + g.name + "|" + n, k -> g.prepare(n));
+            BasisGroup.Prepared tp = transforms.get(checksum + "|" + g.name + "|" + n, k -> g.prepare(n));
             ChiSquareScan.Curve c = ChiSquareScan.scan(gs, side, g, tp, shiftLo, shiftHi, minCoverage);
             curves.add(c);
             groupOfCurve.add(g);

@@ -69,8 +69,14 @@ final class CrossCorrelation {
         return g;
     }
 
-    /** The band-pass filter for FFT length n, values for wavenumbers 0..n/2. */
+    private static final java.util.Map<Integer, double[]> BAND_PASS = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** The band-pass filter for FFT length n, values for wavenumbers 0..n/2 (cached; do not modify). */
     static double[] bandPass(int n) {
+        return BAND_PASS.computeIfAbsent(n, CrossCorrelation::makeBandPass);
+    }
+
+    private static double[] makeBandPass(int n) {
         double k1 = n / 800.0, k2 = n / 400.0, k3 = n / 5.0, k4 = n / 3.0;
         double[] h = new double[n / 2 + 1];
         for (int k = 0; k <= n / 2; k++) {

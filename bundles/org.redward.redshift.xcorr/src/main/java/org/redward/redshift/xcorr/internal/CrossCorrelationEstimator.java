@@ -75,7 +75,21 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
 
     /** One correlation peak of one template. */
     private record Candidate(GriddedTemplate template, CrossCorrelation.Peak peak, double shift, double z, double zError,
-            double[] curveZ, double[] curve) {
+            double[] cc, int from, int to, long lagToShift) {
+
+        /** The correlation over the searched range, for display. */
+        ScoreCurve curve() {
+            double[] z = new double[to - from + 1];
+            double[] c = new double[z.length];
+            double ratio = Math.pow(10.0, LOG10_STEP);
+            double onePlusZ = Math.pow(10.0, (from + lagToShift) * LOG10_STEP);
+            for (int q = from; q <= to; q++) {
+                z[q - from] = onePlusZ - 1;
+                c[q - from] = cc[q];
+                onePlusZ *= ratio;
+            }
+            return new ScoreCurve(z, c, "xcorr_normalised", false);
+        }
     }
 
     @Override
@@ -110,7 +124,8 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
         if (gs == null || gs.usablePixels < 20) {
             return failed("no usable pixels (fewer than 20 unmasked pixels with finite flux and positive inverse variance)", provenance);
         }
-        TemplateBank bank = banks.get(set.id() + "|" + set.version() + "|" + set.checksum(), k -> TemplateBank.of(set, LOG10_STEP));
+        String checksum = set.checksum();
+        TemplateBank bank = banks.get(set.id() + "|" + set.version() + "|" + checksum, k -> TemplateBank.of(set, LOG10_STEP));
         if (bank.templates.isEmpty()) {
             return failed("template set " + set.id() + " has no usable template"
                     + (bank.rejected.isEmpty() ? "" : " (" + String.join("; ", bank.rejected) + ")"), provenance);
@@ -132,7 +147,7 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
                 return failed("the spectrum has no structure left after continuum removal and filtering (flat or constant flux)",
                         provenance);
             }
-            CrossCorrelation.Filtered th = transforms.get(set.checksum() + "|" + t.template.id() + "|" + n,
+            CrossCorrelation.Filtered th = transforms.get(checksum + "|" + t.template.id() + "|" + n,
                     k -> CrossCorrelation.Filtered.of(CrossCorrelation.prepare(t.flux, coveredWeights(t)), n));
             if (!(th.energy() > 0)) {
                 continue;
@@ -145,12 +160,6 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
                 cc[q] = c[Math.floorMod(validLo + q, n)];
             }
             int from = kLo - validLo, to = kHi - validLo;
-            double[] curveZ = new double[to - from + 1];
-            double[] curve = new double[to - from + 1];
-            for (int q = from; q <= to; q++) {
-                curveZ[q - from] = Shifts.z(q + validLo + offset, LOG10_STEP);
-                curve[q - from] = cc[q];
-            }
             List<Integer> maxima = Peaks.maxima(cc, from, to);
             int taken = 0;
             for (int q : maxima) {
@@ -160,7 +169,7 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
                 CrossCorrelation.Peak p = CrossCorrelation.fit(cc, q, 0, cc.length - 1);
                 double shift = p.lag() + validLo + offset;
                 double z = Shifts.z(shift, LOG10_STEP);
-                all.add(new Candidate(t, p, shift, z, Shifts.zError(z, p.sigmaPixels(), LOG10_STEP), curveZ, curve));
+                all.add(new Candidate(t, p, shift, z, Shifts.zError(z, p.sigmaPixels(), LOG10_STEP), cc, from, to, validLo + offset));
                 taken++;
             }
         }
@@ -190,7 +199,7 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
             alts.add(new Alternative(c.z(), c.zError(), c.peak().r(), r - c.peak().r(), c.template().template.objectClass(),
                     c.template().template.subclass()));
         }
-        b.alternatives(alts).scoreCurve(new ScoreCurve(best.curveZ(), best.curve(), "xcorr_normalised", false));
+        b.alternatives(alts).scoreCurve(best.curve());
         double r2 = distinct.size() > 1 ? distinct.get(1).peak().r() : 0;
         b.diagnostic("r", r).diagnostic("peak_height", best.peak().height()).diagnostic("peak_fwhm_pixels", best.peak().fwhmPixels())
                 .diagnostic("runner_up_r", r2).diagnostic("usable_pixels", gs.usablePixels).diagnostic("snr_median", gs.medianSnr());
