@@ -114,6 +114,8 @@ public final class TemplateBundleWriter {
         a.putValue("Bundle-Description", oneLine(description));
         a.putValue("Redward-Template-Checksum", loaded.set().checksum());
         a.putValue(TemplateSet.BUNDLE_HEADER, descriptorPath);
+        // a data bundle is useless without the extender: say so, so that the framework can tell
+        a.putValue("Require-Capability", "osgi.extender;filter:=\"(&(osgi.extender=redward.templates)(version>=1.0)(!(version>=2.0)))\"");
         Path parent = out.toAbsolutePath().getParent();
         if (parent != null) {
             Files.createDirectories(parent);
