@@ -228,6 +228,16 @@ public final class TemplateSetLoader {
         if (allZero) {
             throw new TemplateDataException(where + ": the flux is zero everywhere");
         }
+        if (!zeroBad) {
+            int zeros = 0;
+            for (double v : f) {
+                zeros += v == 0 ? 1 : 0;
+            }
+            if (zeros > 0) {
+                notes.add(where + ": " + zeros + " interior pixels have flux exactly 0 and are kept as data;"
+                        + " if they are masked pixels, declare zero-is-bad (templates pack --zero-is-bad --bad-pixels interpolate)");
+            }
+        }
         if (bad > 0) {
             if (badPolicy.equals("reject")) {
                 throw new TemplateDataException(String.format(Locale.ROOT,

@@ -112,7 +112,7 @@ public final class TemplatesCommand implements Command {
             case "list":
                 return list(ctx, rest);
             default:
-                throw new UsageException("templates: unknown action '" + arguments.get(0) + "' (pack, build, list)");
+                throw new UsageException("unknown action '" + arguments.get(0) + "' (pack, build, list)");
         }
     }
 
@@ -121,7 +121,7 @@ public final class TemplatesCommand implements Command {
         try {
             cl.parseArgs(arguments.toArray(new String[0]));
         } catch (CommandLine.ParameterException e) {
-            throw new UsageException("templates " + cl.getCommandName() + ": " + e.getMessage());
+            throw new UsageException(cl.getCommandName() + ": " + e.getMessage());
         }
         if (cl.isUsageHelpRequested()) {
             cl.usage(ctx.out());
@@ -139,7 +139,7 @@ public final class TemplatesCommand implements Command {
             return values.get(0).trim();
         }
         if (values.size() != files) {
-            throw new UsageException("templates pack: " + option + " given " + values.size() + " times for " + files
+            throw new UsageException("pack: " + option + " given " + values.size() + " times for " + files
                     + " files (give it once for all, or once per file)");
         }
         return values.get(i).trim();
@@ -156,23 +156,23 @@ public final class TemplatesCommand implements Command {
         try {
             w = new TemplateBundleWriter(a.id, a.version, description);
         } catch (IllegalArgumentException e) {
-            throw new UsageException("templates pack: --version: " + e.getMessage());
+            throw new UsageException("pack: --version: " + e.getMessage());
         }
         if (a.badPixels != null && !a.badPixels.equals("reject") && !a.badPixels.equals("interpolate")) {
-            throw new UsageException("templates pack: --bad-pixels must be reject or interpolate, not '" + a.badPixels + "'");
+            throw new UsageException("pack: --bad-pixels must be reject or interpolate, not '" + a.badPixels + "'");
         }
         for (int i = 0; i < n; i++) {
             Path f = ctx.workingDirectory().resolve(a.files.get(i));
             if (!Files.isRegularFile(f)) {
-                throw new UsageException("templates pack: no such file: " + f);
+                throw new UsageException("pack: no such file: " + f);
             }
             String cls = perFile(a.classes, i, n, "--class");
             if (ObjectClass.parse(cls) == ObjectClass.UNKNOWN) {
-                throw new UsageException("templates pack: --class '" + cls + "' must be galaxy, quasar or star");
+                throw new UsageException("pack: --class '" + cls + "' must be galaxy, quasar or star");
             }
             String medium = perFile(a.media, i, n, "--medium").toLowerCase(Locale.ROOT);
             if (!medium.equals("air") && !medium.equals("vacuum")) {
-                throw new UsageException("templates pack: --medium '" + medium + "' must be air or vacuum");
+                throw new UsageException("pack: --medium '" + medium + "' must be air or vacuum");
             }
             Map<String, String> keys = new LinkedHashMap<>();
             keys.put(Descriptor.CLASS, ObjectClass.parse(cls).key());
@@ -209,7 +209,7 @@ public final class TemplatesCommand implements Command {
         }
         PrintStream o = ctx.out();
         o.println("wrote " + out + " (bundle " + bsn + " " + s.version() + ")");
-        o.println("  set " + s.id() + ": " + s.templates().size() + " templates " + classCounts(s) + ", sha256 " + s.checksum());
+        o.println("  set " + s.id() + ": " + s.templates().size() + (s.templates().size() == 1 ? " template " : " templates ") + classCounts(s) + ", sha256 " + s.checksum());
         for (Template t : s.templates()) {
             o.printf(Locale.ROOT, "    %-16s %-7s %-16s %8.1f - %8.1f A  %6d px%n", t.id(), t.objectClass().key(), t.subclass(),
                     t.minRestVacuumAngstrom(), t.maxRestVacuumAngstrom(), t.size());
