@@ -224,6 +224,8 @@ public abstract class TemplateSetContractTest {
                 }
                 double at = peak(w, f, best);
                 checked++;
+                System.out.printf(Locale.ROOT, "%s %s: %s expected at %.3f, found at %.3f Angstrom (tolerance %.2f; %s)%n",
+                        set.id(), t.id(), e.name(), e.restVacuumAngstrom(), at, e.toleranceAngstrom(), e.source());
                 assertEquals(e.restVacuumAngstrom(), at, e.toleranceAngstrom(), String.format(Locale.ROOT,
                         "%s: %s (%s) found at %.2f Angstrom", t.id(), e.name(), e.source(), at));
             }
