@@ -156,11 +156,8 @@ final class TemplateBuildCommand {
             return 1;
         }
         Path out = ctx.workingDirectory().resolve(a.out);
-        TemplateSetLoader.Loaded loaded;
-        try {
-            loaded = w.write(out);
-        } catch (TemplateDataException e) {
-            ctx.err().println("redward templates build: " + e.getMessage());
+        TemplateSetLoader.Loaded loaded = TemplatesCommand.write(ctx, "build", w, out);
+        if (loaded == null) {
             return 1;
         }
         List<String> all = new ArrayList<>(notes);

@@ -189,15 +189,22 @@ public final class TemplatesCommand implements Command {
             w.add(name, f.getFileName().toString(), Files.readAllBytes(f), keys);
         }
         Path out = ctx.workingDirectory().resolve(a.out);
-        TemplateSetLoader.Loaded loaded;
-        try {
-            loaded = w.write(out);
-        } catch (TemplateDataException e) {
-            ctx.err().println("redward templates pack: " + e.getMessage());
+        TemplateSetLoader.Loaded loaded = write(ctx, "pack", w, out);
+        if (loaded == null) {
             return 1;
         }
         report(ctx, a.json, loaded, out, TemplateBundleWriter.symbolicName(a.id));
         return 0;
+    }
+
+    /** Writes the bundle; on refusal prints one line naming the file and returns null. */
+    static TemplateSetLoader.Loaded write(CommandContext ctx, String action, TemplateBundleWriter w, Path out) throws IOException {
+        try {
+            return w.write(out);
+        } catch (TemplateDataException e) {
+            ctx.err().println("redward templates " + action + ": " + e.getMessage());
+            return null;
+        }
     }
 
     /** Prints what was written (shared by pack and build). */
