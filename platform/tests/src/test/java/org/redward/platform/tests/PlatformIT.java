@@ -73,12 +73,14 @@ class PlatformIT {
         Files.writeString(drop.resolve("corrupt.jar"), "not a zip");
         writeJar(drop.resolve("plain.jar"), null);
         writeJar(drop.resolve("broken.jar"), "test.Missing");
+        writeComponentJar(drop.resolve("component.jar"));
         Files.copy(Path.of(System.getProperty("redward.example.jar")), drop.resolve("example.jar"));
         Product.Run bad = Product.run("plugins", "--json", "--bundles", drop.toString());
         assertEquals(0, bad.status(), bad.toString());
         assertTrue(bad.err().contains("corrupt.jar: not a readable jar"), bad.toString());
         assertTrue(bad.err().contains("plain.jar: a plain jar, not an OSGi bundle"), bad.toString());
         assertTrue(bad.err().contains("test.broken 1.0.0 did not start"), bad.toString());
+        assertTrue(bad.err().contains("redward: bundle test.component"), "a failing DS component is named: " + bad);
         assertTrue(bad.out().contains("example-brightest-line"), "the good bundle beside the bad ones works: " + bad);
         for (String line : (bad.err() + unknown.err() + option.err() + missing.err()).split("\n")) {
             assertFalse(line.startsWith("\tat "), "no stack trace without --debug: " + bad);
@@ -95,6 +97,24 @@ class PlatformIT {
             } else {
                 assertTrue(r.out().toLowerCase(java.util.Locale.ROOT).contains("usage"), c + ": " + r);
             }
+        }
+    }
+
+    /** A bundle whose only DS component cannot be activated (its class does not exist). */
+    private static void writeComponentJar(Path file) throws Exception {
+        Manifest mf = new Manifest();
+        Attributes a = mf.getMainAttributes();
+        a.put(Attributes.Name.MANIFEST_VERSION, "1.0");
+        a.putValue("Bundle-ManifestVersion", "2");
+        a.putValue("Bundle-SymbolicName", "test.component");
+        a.putValue("Bundle-Version", "1.0.0");
+        a.putValue("Service-Component", "OSGI-INF/bad.xml");
+        try (JarOutputStream out = new JarOutputStream(Files.newOutputStream(file), mf)) {
+            out.putNextEntry(new java.util.jar.JarEntry("OSGI-INF/bad.xml"));
+            out.write(("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"
+                    + "<scr:component xmlns:scr=\"http://www.osgi.org/xmlns/scr/v1.3.0\" name=\"bad\" immediate=\"true\">"
+                    + "<implementation class=\"test.component.Missing\"/></scr:component>\n").getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            out.closeEntry();
         }
     }
 
