@@ -1,12 +1,10 @@
 package org.redward.survey.internal;
 
-import java.io.BufferedReader;
 import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.io.OutputStreamWriter;
-import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
@@ -14,8 +12,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
-import java.util.Iterator;
-import java.util.NoSuchElementException;
 
 import org.json.JSONException;
 import org.json.JSONObject;
@@ -139,53 +135,9 @@ final class Journal implements AutoCloseable {
         out.close();
     }
 
-    /**
-     * The rows of a (closed) journal, streamed: each iteration reads the file again. Iterators
-     * throw {@link UncheckedIOException} on a read error.
-     */
+    /** The rows of a (closed) journal, streamed: each iteration reads the file again. */
     static Iterable<MeasuredRow> rows(Path file) {
-        return () -> new Iterator<>() {
-            private final BufferedReader in = open();
-            private MeasuredRow next = advance();
-
-            private BufferedReader open() {
-                try {
-                    BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                    r.readLine();
-                    return r;
-                } catch (IOException e) {
-                    throw new UncheckedIOException(e);
-                }
-            }
-
-            private MeasuredRow advance() {
-                try {
-                    String line = in.readLine();
-                    if (line == null) {
-                        in.close();
-                        return null;
-                    }
-                    return RowCodec.parse(new JSONObject(line));
-                } catch (IOException e) {
-                    throw new UncheckedIOException(e);
-                }
-            }
-
-            @Override
-            public boolean hasNext() {
-                return next != null;
-            }
-
-            @Override
-            public MeasuredRow next() {
-                if (next == null) {
-                    throw new NoSuchElementException();
-                }
-                MeasuredRow r = next;
-                next = advance();
-                return r;
-            }
-        };
+        return JsonRows.read(file, true);
     }
 
     /** Reads UTF-8 lines while tracking the byte offset after each complete line. */
