@@ -1,23 +1,30 @@
 package org.redward.survey.internal;
 
 import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
 
 import org.redward.api.formats.SpectrumRecord;
 
 /**
- * The spectra of a run in input order, each with the ordinal of its file in the expanded input
- * list (the journal uses it to resume). One consumer thread. Never throws for bad data: a file
- * that cannot be read yields a failed record.
+ * The spectra of a run in input order. One consumer thread. Never throws for bad data: a file
+ * that cannot be read yields a failed record. Reading is deterministic: the same inputs give the
+ * same records in the same order, which is what lets a resumed run skip what was done.
  */
 interface Feed extends AutoCloseable {
 
-    /** One spectrum (or failed file) and the 0-based number of its file in the expanded inputs. */
-    record Item(int fileNumber, SpectrumRecord record) {
-    }
-
-    /** The next item, or null at the end. */
-    Item next() throws IOException;
+    /** The next record, or null at the end. */
+    SpectrumRecord next() throws IOException;
 
     @Override
     void close();
+
+    /** Where a run's spectra come from. */
+    interface Source {
+        /** The files the inputs stand for, in order (for checksums and the run's fingerprint). */
+        List<Path> expand(List<Path> inputs);
+
+        /** Opens the inputs for streaming. */
+        Feed open(List<Path> inputs);
+    }
 }

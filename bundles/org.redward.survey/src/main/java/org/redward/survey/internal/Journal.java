@@ -31,7 +31,7 @@ final class Journal implements AutoCloseable {
     static final String MAGIC = "redward-measure-journal";
 
     /** What an interrupted run left. */
-    record State(long rows, int lastFileNumber, int lastIndex, String fingerprint) {
+    record State(long rows, String fingerprint) {
         /** Nothing done yet. */
         boolean empty() {
             return rows == 0;
@@ -70,8 +70,6 @@ final class Journal implements AutoCloseable {
     static State recover(Path file) throws IOException {
         long goodEnd = 0;
         long rows = 0;
-        int lastFile = -1;
-        int lastIndex = -1;
         String fingerprint = null;
         try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ, StandardOpenOption.WRITE)) {
             InputStream in = Channels.newInputStream(ch);
@@ -93,12 +91,10 @@ final class Journal implements AutoCloseable {
                     }
                     fingerprint = o.optString("fingerprint");
                 } else {
-                    if (!o.has("sequence") || !o.has(RowCodec.FILE_NUMBER)) {
+                    if (o.optLong("sequence", -1) != rows) {
                         break;
                     }
                     rows++;
-                    lastFile = o.getInt(RowCodec.FILE_NUMBER);
-                    lastIndex = o.getInt("index");
                 }
                 goodEnd = lines.offset();
             }
@@ -109,7 +105,7 @@ final class Journal implements AutoCloseable {
                 ch.truncate(goodEnd);
             }
         }
-        return new State(rows, lastFile, lastIndex, fingerprint);
+        return new State(rows, fingerprint);
     }
 
     /** Opens a recovered journal for appending. */
@@ -120,8 +116,8 @@ final class Journal implements AutoCloseable {
     }
 
     /** Appends one row and hands it to the operating system. */
-    void write(MeasuredRow row, int fileNumber) throws IOException {
-        out.write(RowCodec.toJournalLine(row, fileNumber));
+    void write(MeasuredRow row) throws IOException {
+        out.write(RowCodec.toJson(row).toString());
         out.write('\n');
         out.flush();
     }

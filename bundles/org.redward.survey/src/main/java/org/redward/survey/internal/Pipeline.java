@@ -66,39 +66,33 @@ final class Pipeline {
     /** One spectrum in flight. */
     private static final class Task {
         final long sequence;
-        final int fileNumber;
         final SpectrumRecord record;
         final CompletableFuture<MeasuredRow> result = new CompletableFuture<>();
         final AtomicReference<Thread> thread = new AtomicReference<>();
         volatile long startNanos;
 
-        Task(long sequence, int fileNumber, SpectrumRecord record) {
+        Task(long sequence, SpectrumRecord record) {
             this.sequence = sequence;
-            this.fileNumber = fileNumber;
             this.record = record;
         }
     }
 
-    private static final Task END = new Task(-1, -1, null);
-    private static final Task STOP = new Task(-2, -2, null);
-
-    /** A collected row with the file number the journal keeps beside it. */
-    record Collected(MeasuredRow row, int fileNumber) {
-    }
+    private static final Task END = new Task(-1, null);
+    private static final Task STOP = new Task(-2, null);
 
     /**
      * Runs the feed to its end.
      *
-     * @param firstSequence the sequence number of the first spectrum of the feed (rows done by an
-     *     interrupted run come before it)
+     * @param skip spectra at the start of the feed that an interrupted run already did: read and
+     *     passed over (not measured); the first measured spectrum gets this sequence number
      * @param sink receives every row in input order, on the calling thread
      * @return the number of rows collected
      */
-    long run(Feed feed, long firstSequence, Consumer<Collected> sink) throws IOException, InterruptedException {
+    long run(Feed feed, long skip, Consumer<MeasuredRow> sink) throws IOException, InterruptedException {
         int window = 4 * threads + 4;
         BlockingQueue<Task> ordered = new ArrayBlockingQueue<>(window);
         AtomicReference<Throwable> readFailure = new AtomicReference<>();
-        Thread reader = new Thread(() -> readLoop(feed, firstSequence, ordered, readFailure), "redward-measure-reader");
+        Thread reader = new Thread(() -> readLoop(feed, skip, ordered, readFailure), "redward-measure-reader");
         reader.setDaemon(true);
         for (int i = 0; i < threads; i++) {
             startWorker();
@@ -112,7 +106,7 @@ final class Pipeline {
                     break;
                 }
                 MeasuredRow row = await(t);
-                sink.accept(new Collected(row, t.fileNumber));
+                sink.accept(row);
                 collected++;
             }
         } finally {
@@ -143,11 +137,11 @@ final class Pipeline {
         }
     }
 
-    private void readLoop(Feed feed, long firstSequence, BlockingQueue<Task> ordered, AtomicReference<Throwable> failure) {
-        long seq = firstSequence;
+    private void readLoop(Feed feed, long skip, BlockingQueue<Task> ordered, AtomicReference<Throwable> failure) {
+        long seq = 0;
         try {
             while (true) {
-                Feed.Item item;
+                SpectrumRecord item;
                 try {
                     item = feed.next();
                 } catch (IOException | RuntimeException e) {
@@ -157,9 +151,13 @@ final class Pipeline {
                 if (item == null) {
                     break;
                 }
-                Task t = new Task(seq++, item.fileNumber(), item.record());
+                if (seq < skip) {
+                    seq++;
+                    continue;
+                }
+                Task t = new Task(seq++, item);
                 ordered.put(t);
-                if (item.record().ok()) {
+                if (item.ok()) {
                     work.put(t);
                 } else {
                     t.result.complete(unreadable(t));

@@ -21,12 +21,9 @@ import org.redward.spectrum.ObjectClass;
  */
 final class RowCodec {
 
-    /** Journal-only key: the ordinal of the spectrum's file in the expanded inputs. */
-    static final String FILE_NUMBER = "file_number";
-
     private static final Set<String> FIXED = Set.of("source", "index", "id", "status", "error", "z", "z_err", "class",
             "grade", "estimator", "alternatives", "subclass", "reliability", "ra_deg", "dec_deg", "location",
-            "warnings", "seconds", "fault", "fault_bundle", "sequence", FILE_NUMBER);
+            "warnings", "seconds", "fault", "fault_bundle", "sequence");
 
     private RowCodec() {
     }
@@ -46,10 +43,6 @@ final class RowCodec {
                 .put("fault_bundle", r.faultBundle()).put("sequence", r.sequence());
         r.derived().forEach(j::put);
         return j;
-    }
-
-    static String toJournalLine(MeasuredRow r, int fileNumber) {
-        return toJson(r).put(FILE_NUMBER, fileNumber).toString();
     }
 
     /** Parses a line written by {@link #toJson}; throws {@link org.json.JSONException} if malformed. */

@@ -34,20 +34,15 @@ import org.redward.api.survey.MeasuredRow;
  */
 final class SurveyRun {
 
-    /** Opens a feed over the expanded files from a file number, skipping spectra already done. */
-    interface FeedFactory {
-        Feed open(List<Path> files, int startFile, int skipThroughIndex);
-    }
-
     private final MeasureRequest request;
     private final Estimation estimation;
-    private final FeedFactory feeds;
+    private final Feed.Source feeds;
     private final Optional<CatalogWriter> writer;
     private final List<Column> derivedColumns;
     private final Map<String, String> provenance;
     private LongConsumer progress = n -> { };
 
-    SurveyRun(MeasureRequest request, Estimation estimation, FeedFactory feeds, Optional<CatalogWriter> writer,
+    SurveyRun(MeasureRequest request, Estimation estimation, Feed.Source feeds, Optional<CatalogWriter> writer,
             List<Column> derivedColumns, Map<String, String> provenance) {
         this.request = request;
         this.estimation = estimation;
@@ -67,11 +62,11 @@ final class SurveyRun {
     }
 
     MeasureSummary run(MeasureListener listener) throws IOException, InterruptedException {
-        List<Path> files = ReaderFeed.expand(request.inputs());
+        List<Path> files = feeds.expand(request.inputs());
         String fingerprint = fingerprint(files);
         Optional<Path> out = request.output().map(Path::toAbsolutePath);
         Journal journal = null;
-        Journal.State state = new Journal.State(0, -1, -1, fingerprint);
+        Journal.State state = new Journal.State(0, fingerprint);
         if (out.isPresent()) {
             Path jf = Journal.beside(out.get());
             if (Files.exists(jf)) {
@@ -92,29 +87,23 @@ final class SurveyRun {
         } else if (request.resume()) {
             throw new IllegalArgumentException("--resume needs --out: the journal lives beside the catalogue");
         }
-        int startFile = 0;
-        int skip = -1;
-        if (!state.empty()) {
-            startFile = state.lastIndex() < 0 ? state.lastFileNumber() + 1 : state.lastFileNumber();
-            skip = state.lastIndex() < 0 ? -1 : state.lastIndex();
-        }
         listener.started(state.rows());
         int threads = request.threads() > 0 ? request.threads() : Runtime.getRuntime().availableProcessors();
         Pipeline pipeline = new Pipeline(threads, request.timeLimit(), estimation, request.zMin(), request.zMax());
         long[] counts = new long[2];
         long t0 = System.nanoTime();
         final Journal j = journal;
-        try (Feed feed = feeds.open(files, startFile, skip)) {
-            pipeline.run(feed, state.rows(), c -> {
+        try (Feed feed = feeds.open(request.inputs())) {
+            pipeline.run(feed, state.rows(), row -> {
                 if (j != null) {
                     try {
-                        j.write(c.row(), c.fileNumber());
+                        j.write(row);
                     } catch (IOException e) {
                         throw new UncheckedIOException(e);
                     }
                 }
-                counts[c.row().ok() ? 0 : 1]++;
-                listener.row(c.row());
+                counts[row.ok() ? 0 : 1]++;
+                listener.row(row);
                 progress.accept(1);
             });
         } catch (UncheckedIOException e) {

@@ -17,7 +17,8 @@ import org.redward.api.catalog.CatalogWriterRegistry;
 import org.redward.api.commands.PlatformInfo;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.ProfileRegistry;
-import org.redward.api.formats.ReaderRegistry;
+import org.redward.api.formats.ReadOptions;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.redshift.EstimationContext;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.redshift.RedshiftEstimator;
@@ -45,7 +46,7 @@ public final class SurveyService implements SurveyMeasurer {
     @Reference
     TemplateRegistry templates;
     @Reference
-    ReaderRegistry readers;
+    SpectrumInputs inputs;
     @Reference
     ProfileRegistry profiles;
     @Reference
@@ -78,10 +79,12 @@ public final class SurveyService implements SurveyMeasurer {
         } else if (request.templatesId().isPresent()) {
             throw new IllegalArgumentException("--templates: estimator '" + est.id() + "' uses no templates");
         }
-        Optional<InstrumentProfile> profile = Optional.empty();
+        ReadOptions read = ReadOptions.defaults().withStallLimit(request.timeLimit());
         if (request.profileId().isPresent()) {
-            profile = Optional.of(profiles.require(request.profileId().get()).service());
-            List<double[]> masked = profile.get().maskedRegionsVacuumAngstrom();
+            String pid = request.profileId().get();
+            InstrumentProfile profile = require(profiles.find(pid), "--profile", pid, profiles.ids()).service();
+            read = read.withProfile(pid);
+            List<double[]> masked = profile.maskedRegionsVacuumAngstrom();
             ctx = ctx.withMaskedRegions(masked.toArray(new double[0][]));
             prov.put("profile", request.profileId().get());
         }
@@ -102,9 +105,8 @@ public final class SurveyService implements SurveyMeasurer {
                     "--out " + request.output().get() + ": no catalogue writer for this extension (writers: "
                             + (writers.ids().isEmpty() ? "none" : String.join(", ", writers.ids())) + ")")).service());
         }
-        Optional<InstrumentProfile> prof = profile;
         SurveyRun run = new SurveyRun(request, new EstimatorEstimation(est, ctx, enricher),
-                (files, start, skip) -> new ReaderFeed(readers, prof, files, start, skip), writer, enricher.columns(), prov)
+                new FacadeFeed(inputs, read), writer, enricher.columns(), prov)
                 .progress(progress);
         try {
             return run.run(listener);

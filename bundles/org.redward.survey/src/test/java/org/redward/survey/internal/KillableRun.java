@@ -49,7 +49,7 @@ public final class KillableRun {
             }
         };
         SurveyRun run = new SurveyRun(MeasureRequest.of(List.of()).withOutput(out).withResume(true).withThreads(2), slow,
-                (f, start, skip) -> Synthetic.feed(inputs, perFile, start, skip),
+                Synthetic.source(inputs, perFile),
                 Optional.of(new SurveyRunTest.LinesWriter()), List.of(), Map.of("product.version", "test"));
         run.run(MeasureListener.none());
     }

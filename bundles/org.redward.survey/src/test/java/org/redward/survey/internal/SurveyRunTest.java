@@ -48,7 +48,7 @@ class SurveyRunTest {
             throws Exception {
         List<Path> inputs = Synthetic.files(dir, files);
         SurveyRun run = new SurveyRun(req.withInputs(List.of()), est,
-                (f, start, skip) -> Synthetic.feed(inputs, perFile, start, skip), Optional.of(new LinesWriter()), List.of(),
+                Synthetic.source(inputs, perFile), Optional.of(new LinesWriter()), List.of(),
                 Map.of("product.version", "test"));
         return run.run(rows::add);
     }
@@ -110,7 +110,7 @@ class SurveyRunTest {
             }
         };
         List<MeasuredRow> rows = new ArrayList<>();
-        MeasureSummary s = run(bad, 1, 30, MeasureRequest.of(List.of()).withThreads(2).withTimeLimit(Duration.ofMillis(200)), rows);
+        MeasureSummary s = run(bad, 1, 30, MeasureRequest.of(List.of()).withThreads(2).withTimeLimit(Duration.ofSeconds(2)), rows);
         assertEquals(30, s.total());
         assertEquals(MeasuredRow.FAULT_THREW, rows.get(1).fault());
         assertTrue(rows.get(1).error().contains("plug-in bug") && rows.get(1).error().contains("test.bad 0.0.1"), rows.get(1).error());

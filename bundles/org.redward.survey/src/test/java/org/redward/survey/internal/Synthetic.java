@@ -48,32 +48,37 @@ final class Synthetic {
         return Spectrum.of(axis, flux, ivar, mask, "1e-17 erg/s/cm2/A", md);
     }
 
-    /** A feed of {@code files} invented files of {@code perFile} spectra each; every 50th spectrum is unreadable. */
-    static Feed feed(List<Path> files, int perFile, int startFile, int skipThroughIndex) {
-        return new Feed() {
-            int file = startFile;
-            int index = file == startFile ? skipThroughIndex + 1 : 0;
-
+    /** A source of {@code files} invented files of {@code perFile} spectra each; every 50th spectrum is unreadable. */
+    static Feed.Source source(List<Path> files, int perFile) {
+        return new Feed.Source() {
             @Override
-            public Item next() {
-                if (index >= perFile) {
-                    file++;
-                    index = 0;
-                }
-                if (file >= files.size()) {
-                    return null;
-                }
-                int n = file * perFile + index;
-                Path f = files.get(file);
-                int i = index++;
-                if (n % 50 == 49) {
-                    return new Item(file, SpectrumRecord.failed(f, i, "row " + i, f + ": row " + i + ": column FLUX holds no numbers"));
-                }
-                return new Item(file, SpectrumRecord.ok(f, i, "row " + i, spectrum(n)));
+            public List<Path> expand(List<Path> inputs) {
+                return files;
             }
 
             @Override
-            public void close() {
+            public Feed open(List<Path> inputs) {
+                return new Feed() {
+                    int n;
+
+                    @Override
+                    public SpectrumRecord next() {
+                        if (n >= files.size() * perFile) {
+                            return null;
+                        }
+                        int k = n++;
+                        Path f = files.get(k / perFile);
+                        int i = k % perFile;
+                        if (k % 50 == 49) {
+                            return SpectrumRecord.failed(f, i, "row " + i, f + ": row " + i + ": column FLUX holds no numbers");
+                        }
+                        return SpectrumRecord.ok(f, i, "row " + i, spectrum(k));
+                    }
+
+                    @Override
+                    public void close() {
+                    }
+                };
             }
         };
     }
