@@ -25,6 +25,13 @@ import uk.ac.starlink.votable.VOTableWriter;
 /** The catalogue writers built on STIL (embedded): FITS binary table, VOTable 1.4, ECSV. */
 final class StilWriters {
 
+    /** STIL reports routine choices (e.g. trimmed FITS comments) at INFO on standard error: keep only warnings. */
+    private static final java.util.logging.Logger STIL_LOG = java.util.logging.Logger.getLogger("uk.ac.starlink");
+
+    static {
+        STIL_LOG.setLevel(java.util.logging.Level.WARNING);
+    }
+
     private StilWriters() {
     }
 

@@ -23,7 +23,7 @@ final class CatalogLayout {
     CatalogLayout(List<Column> derivedColumns) {
         this.derived = List.copyOf(derivedColumns);
         columns.add(Column.ofString("source", "meta.file", "file the spectrum came from"));
-        columns.add(Column.ofInt("index", "meta.number", "0-based index of the spectrum in its file (-1: the whole file failed)"));
+        columns.add(Column.ofInt("index", "meta.number", "0-based index in its file (-1: whole file failed)"));
         columns.add(Column.ofString("id", "meta.id;meta.main", "object id"));
         columns.add(Column.ofString("status", "meta.code.status", "ok or failed"));
         columns.add(Column.ofString("error", "meta.note", "why the spectrum failed (empty when ok)"));
