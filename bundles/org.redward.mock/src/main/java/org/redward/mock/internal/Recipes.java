@@ -268,8 +268,10 @@ final class Recipes {
         double teff = logUniform(r, 3200, 12000);
         double cool = Math.min(1, Math.max(0, (7500 - teff) / 3000));
         double metals = uniform(r, 0.4, 1.3);
+        double hot = Math.min(1, Math.max(0, (teff - 7000) / 3000));
         DoubleUnaryOperator cont = lam -> planck(lam, teff) / planck(5500, teff)
-                * (1 - 0.45 * cool * blueStep(lam, 4000, 120)) * (1 - 0.3 * cool * blueStep(lam, 3200, 200));
+                * (1 - 0.45 * cool * blueStep(lam, 4000, 120)) * (1 - 0.3 * cool * blueStep(lam, 3200, 200))
+                * (1 - 0.45 * hot * blueStep(lam, 3646, 20)); // Balmer jump of A and late B stars
         Model m = new Model(g, z, cont);
         double vsini = uniform(r, 2, teff > 7000 ? 120 : 15);
         double balmer = 1.0 + 13.0 * Math.exp(-Math.pow((teff - 9500) / 2600, 2));

@@ -135,8 +135,9 @@ public final class SurveyGenerator {
                     case GALAXY_EMISSION -> smail(r, 0.38, 0.005, 1.2);
                     default -> Recipes.uniform(r, 0.25, 3.5);
                 };
-                vPec = 300 * r.nextGaussian();
-                zBary = (1 + zCosmo) * (1 + vPec / Grid.C_KM_S) - 1;
+                vPec = 300 * r.nextGaussian(); // typical galaxy peculiar velocities ~300 km/s (common practice)
+                double beta = vPec / Grid.C_KM_S;
+                zBary = (1 + zCosmo) * Math.sqrt((1 + beta) / (1 - beta)) - 1; // relativistic Doppler, composed multiplicatively
             }
             zTopo = (1 + zBary) / (1 + vBary / Grid.C_KM_S) - 1;
             Recipes.Built b = switch (kind) {
