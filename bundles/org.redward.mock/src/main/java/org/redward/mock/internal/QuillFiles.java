@@ -20,8 +20,9 @@ import nom.tam.util.FitsOutputStream;
  *
  * <pre>
  * HDU 0  primary, no data. TELESCOP, INSTRUME, OBSERVAT, FIELD, EXPID, EXPTIME,
- *        MJD-AVG / DATE-AVG (mid-exposure, UTC), TIMESYS, OBSGEO-L / -B / -H (site, WGS84),
- *        RADESYS, SPECSYS = 'TOPOCENT', NFIBRE.
+ *        MJD-OBS / DATE-OBS (start) and MJD-AVG / DATE-AVG (mid-exposure), UTC; TIMESYS,
+ *        OBSGEO-L / -B / -H (site, WGS84), RADESYS, RA / DEC (pointing centre),
+ *        SPECSYS = 'TOPOCENT', NFIBRE.
  * HDU 1  EXTNAME = 'FIBRES', binary table, one row per fibre:
  *        FIBRE  J       fibre number
  *        OBJ_ID 16A     object identifier ('' for none)
@@ -31,7 +32,8 @@ import nom.tam.util.FitsOutputStream;
  *        MASK   4961B   bits: 1 cosmic ray, 2 bad CCD column, 4 dead fibre (IVAR = 0 there)
  *        The wavelength axis of the array columns is given by the FITS vector-column WCS keywords
  *        (FITS Standard 4.0, sect. 8.4.2): 1CTYPn = 'AWAV' (air wavelength), 1CUNIn = 'Angstrom',
- *        1CRPXn, 1CRVLn, 1CDLTn: lambda_air(i) = 1CRVLn + (i + 1 - 1CRPXn) * 1CDLTn, i from 0.
+ *        1CRPXn, 1CRVLn, 1CDLTn: lambda_air(i) = 1CRVLn + (i + 1 - 1CRPXn) * 1CDLTn, i from 0;
+ *        repeated as CTYPE1, CUNIT1, CRPIX1, CRVAL1, CDELT1 for readers that look for axis 1.
  * </pre>
  * Not thread-safe per file; different files may be written concurrently.
  */
@@ -71,12 +73,17 @@ public final class QuillFiles {
             h.addValue("EXPID", exposure + 1, "exposure number");
             h.addValue("EXPTIME", Scenario.EXPOSURE_S, "[s] exposure time");
             h.addValue("TIMESYS", "UTC", "time scale of MJD-AVG and DATE-AVG");
+            double start = mjd - Scenario.EXPOSURE_S / 2 / 86400.0;
+            h.addValue("MJD-OBS", start, "[d] start of the exposure, Modified Julian Date");
+            h.addValue("DATE-OBS", isoDate(start), "start of the exposure");
             h.addValue("MJD-AVG", mjd, "[d] mid-exposure Modified Julian Date");
             h.addValue("DATE-AVG", isoDate(mjd), "mid-exposure date and time");
             h.addValue("OBSGEO-L", Scenario.SITE_LONGITUDE_DEG, "[deg] site longitude, east positive (WGS84)");
             h.addValue("OBSGEO-B", Scenario.SITE_LATITUDE_DEG, "[deg] site geodetic latitude (WGS84)");
             h.addValue("OBSGEO-H", Scenario.SITE_HEIGHT_M, "[m] site height above the ellipsoid");
             h.addValue("RADESYS", "ICRS", "frame of RA and DEC");
+            h.addValue("RA", Scenario.FIELD_RA_DEG, "[deg] pointing centre; each fibre's position is in FIBRES");
+            h.addValue("DEC", Scenario.FIELD_DEC_DEG, "[deg] pointing centre; each fibre's position is in FIBRES");
             h.addValue("SPECSYS", "TOPOCENT", "wavelengths as observed, not frame-corrected");
             h.addValue("NFIBRE", n, "rows of the FIBRES table");
             h.addValue("ORIGIN", "Redward mock survey generator v" + SurveyGenerator.VERSION, "invented data");
@@ -102,6 +109,12 @@ public final class QuillFiles {
                 t.addValue("1CRVL" + c, Scenario.WAVELENGTH_START_AIR_ANGSTROM, "[Angstrom] air wavelength at 1CRPX");
                 t.addValue("1CDLT" + c, Scenario.WAVELENGTH_STEP_ANGSTROM, "[Angstrom] step per pixel");
             }
+            // the same axis as plain keywords, for readers that look for a spectral axis 1 in the header
+            t.addValue("CTYPE1", "AWAV", "spectral axis of FLUX, IVAR, MASK (air wavelength)");
+            t.addValue("CUNIT1", "Angstrom", null);
+            t.addValue("CRPIX1", 1.0, null);
+            t.addValue("CRVAL1", Scenario.WAVELENGTH_START_AIR_ANGSTROM, "[Angstrom]");
+            t.addValue("CDELT1", Scenario.WAVELENGTH_STEP_ANGSTROM, "[Angstrom]");
             t.insertComment("MASK bits: 1 cosmic ray, 2 bad CCD column, 4 dead fibre; IVAR = 0 where flagged.");
             t.insertComment("Line-spread function: Gaussian, FWHM 3.3 Angstrom along the whole range.");
             fits.addHDU(hdu);
