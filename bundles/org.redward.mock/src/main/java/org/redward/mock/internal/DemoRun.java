@@ -130,121 +130,25 @@ final class DemoRun {
         try (var s = Files.list(survey)) {
             files = s.filter(p -> p.getFileName().toString().endsWith(".fits")).sorted().toList();
         }
-        List<Row> rows = new ArrayList<>();
-        long tRead = System.nanoTime();
-        EstimationContext ec = EstimationContext.defaults();
-        if (est.isPresent() && Boolean.TRUE.equals(est.get().properties().get(RedshiftEstimator.USES_TEMPLATES))) {
-            Optional<Provided<TemplateSet>> ts = templates.providers().stream().findFirst();
-            if (ts.isEmpty()) {
-                cautions.add("estimator " + est.get().id() + " needs a template set and none is installed");
-                est = Optional.empty();
-            } else {
-                ec = ec.withTemplates(ts.get().service());
-            }
+        Measurer.Result r = new Measurer(ctx, readers, templates).measure(files, (f, i) -> truth.get(f + "#" + i),
+                est.map(List::of).orElse(List.of()), threads, truth.size(), est.isPresent() ? "reading and measuring" : "reading");
+        cautions.addAll(r.notes());
+        List<Row> rows = r.rows().values().iterator().next();
+        if (!r.unavailable().isEmpty()) {
+            steps.add(new Step("read spectra", "not available", r.unavailable(), r.seconds()));
+            return rows;
         }
-        ExecutorService pool = Executors.newFixedThreadPool(threads);
-        Semaphore inFlight = new Semaphore(threads * 8);
-        List<Future<?>> futures = new ArrayList<>();
-        int readFailures = 0;
-        double measureSeconds = 0;
-        try (Progress p = ctx.progress(est.isPresent() ? "reading and measuring" : "reading", truth.size())) {
-            for (Path f : files) {
-                Optional<SpectrumReader> reader = chooseReader(f);
-                if (reader.isEmpty()) {
-                    steps.add(new Step("read spectra", "not available", "no installed reader accepts " + f.getFileName(), secs(tRead)));
-                    return rows;
-                }
-                try (SpectrumSource src = reader.get().open(f, Optional.empty())) {
-                    while (src.hasNext()) {
-                        SpectrumRecord rec = src.next();
-                        String name = f.getFileName().toString();
-                        TruthRow tr = truth.get(name + "#" + rec.index());
-                        Row row = new Row(name, rec.index(), rec.spectrum().flatMap(s -> s.metadata().objectId()).orElse(""),
-                                tr, rec.spectrum().map(Spectrum::metadata).orElse(null));
-                        rows.add(row);
-                        if (!rec.ok()) {
-                            row.error = rec.error();
-                            readFailures++;
-                            p.advance(1);
-                            continue;
-                        }
-                        if (est.isEmpty()) {
-                            p.advance(1);
-                            continue;
-                        }
-                        Spectrum sp = rec.spectrum().get();
-                        RedshiftEstimator e = est.get().service();
-                        EstimationContext ctxE = ec;
-                        inFlight.acquireUninterruptibly();
-                        futures.add(pool.submit(() -> {
-                            try {
-                                fill(row, e.estimate(sp, ctxE));
-                            } catch (RuntimeException ex) {
-                                row.error = "estimator failed: " + ex;
-                            } finally {
-                                inFlight.release();
-                                p.advance(1);
-                            }
-                        }));
-                    }
-                } catch (Exception ex) {
-                    throw new IOException(f + ": " + ex.getMessage(), ex);
-                }
-            }
-            for (Future<?> fu : futures) {
-                try {
-                    fu.get();
-                } catch (Exception ex) {
-                    throw new IOException("measuring failed: " + ex.getMessage(), ex);
-                }
-            }
-        } finally {
-            pool.shutdownNow();
-        }
-        measureSeconds = secs(tRead);
-        steps.add(new Step("read spectra", "done", rows.size() + " spectra from " + files.size() + " files"
-                + (readFailures > 0 ? ", " + readFailures + " unreadable" : ""), est.isPresent() ? 0 : measureSeconds));
-        if (est.isPresent()) {
-            long measured = rows.stream().filter(r -> r.measured).count();
+        steps.add(new Step("read spectra", "done", r.spectra() + " spectra from " + files.size() + " files"
+                + (r.readFailures() > 0 ? ", " + r.readFailures() + " unreadable" : ""), est.isPresent() ? 0 : r.seconds()));
+        if (est.isPresent() && r.rows().containsKey(est.get().id())) {
+            long measured = rows.stream().filter(x -> x.measured).count();
             steps.add(new Step("measure redshifts", "done", measured + " of " + rows.size() + " with " + est.get().id() + " ("
-                    + est.get().bundleSymbolicName() + " " + est.get().bundleVersion() + "), " + threads + " threads", measureSeconds));
+                    + est.get().bundleSymbolicName() + " " + est.get().bundleVersion() + "), " + threads + " threads", r.seconds()));
         } else {
-            steps.add(new Step("measure redshifts", "not available", "no redshift estimator installed", 0));
+            steps.add(new Step("measure redshifts", "not available", est.isPresent() ? "estimator " + est.get().id()
+                    + " could not run" : "no redshift estimator installed", 0));
         }
         return rows;
-    }
-
-    private Optional<SpectrumReader> chooseReader(Path f) throws IOException {
-        byte[] head;
-        try (InputStream in = Files.newInputStream(f)) {
-            head = in.readNBytes(8640);
-        }
-        SpectrumReader best = null;
-        int bestScore = 0;
-        for (Provided<SpectrumReader> r : readers.providers()) {
-            int s = r.service().sniff(f, head);
-            if (s > bestScore) {
-                best = r.service();
-                bestScore = s;
-            }
-        }
-        return Optional.ofNullable(best);
-    }
-
-    private static void fill(Row row, RedshiftSolution s) {
-        row.estimator = s.provenance().getOrDefault("estimator", "");
-        if (!s.ok()) {
-            row.error = s.error();
-            return;
-        }
-        row.measured = true;
-        row.z = s.z();
-        row.zErr = s.zError();
-        row.objectClass = s.objectClass();
-        row.grade = s.grade();
-        row.reliability = s.reliability();
-        row.warnings = s.warnings();
-        row.alternatives = s.alternatives().size() > 3 ? s.alternatives().subList(0, 3) : s.alternatives();
     }
 
     static double secs(long t0) {

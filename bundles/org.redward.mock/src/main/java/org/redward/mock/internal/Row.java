@@ -45,6 +45,6 @@ final class Row {
     }
 
     Scorecard.Outcome outcome() {
-        return new Scorecard.Outcome(truth, measured, z, objectClass, grade);
+        return new Scorecard.Outcome(truth, measured, z, objectClass, grade, reliability);
     }
 }

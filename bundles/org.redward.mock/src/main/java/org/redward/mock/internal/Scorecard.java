@@ -40,7 +40,8 @@ public final class Scorecard {
     public static final double[] SNR_EDGES = {0, 2, 5, 10, 20, Double.POSITIVE_INFINITY};
 
     /** One measured fibre with its truth. */
-    public record Outcome(TruthRow truth, boolean measured, double z, ObjectClass objectClass, String grade) {
+    public record Outcome(TruthRow truth, boolean measured, double z, ObjectClass objectClass, String grade,
+            double reportedReliability) {
 
         double relativeError() {
             return (z - truth.zTopo()) / (1 + truth.zTopo());
@@ -162,6 +163,37 @@ public final class Scorecard {
         List<Figures> f = new ArrayList<>(m.values());
         f.sort(Comparator.comparingDouble((Figures x) -> -x.successRate()).thenComparing(Figures::group));
         return f;
+    }
+
+    /**
+     * The grade the estimator trusts most: the one whose solutions carry the highest median
+     * reported reliability (ties and unknown reliabilities: the alphabetically first grade).
+     */
+    public String topGrade() {
+        Map<String, List<Double>> rel = new TreeMap<>();
+        for (Outcome o : outcomes) {
+            if (o.measured() && !o.grade().isEmpty()) {
+                rel.computeIfAbsent(o.grade(), k -> new ArrayList<>()).add(o.reportedReliability());
+            }
+        }
+        String best = "";
+        double bestRel = Double.NEGATIVE_INFINITY;
+        for (Map.Entry<String, List<Double>> e : rel.entrySet()) {
+            double[] a = e.getValue().stream().mapToDouble(Double::doubleValue).filter(Double::isFinite).toArray();
+            double m = a.length == 0 ? Double.NEGATIVE_INFINITY : median(a);
+            if (best.isEmpty() || m > bestRel) {
+                best = e.getKey();
+                bestRel = m;
+            }
+        }
+        return best;
+    }
+
+    /** Median reliability the estimator reported for a grade (NaN if none). */
+    public double reportedReliability(String grade) {
+        double[] a = outcomes.stream().filter(o -> o.measured() && o.grade().equals(grade))
+                .mapToDouble(Outcome::reportedReliability).filter(Double::isFinite).toArray();
+        return median(a);
     }
 
     /** Fibres without an object that were nevertheless given a redshift, by grade. */
