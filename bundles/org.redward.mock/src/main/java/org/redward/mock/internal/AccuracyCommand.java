@@ -43,6 +43,9 @@ public final class AccuracyCommand implements Command {
     private EstimatorRegistry estimators;
     @Reference
     private TemplateRegistry templates;
+    @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL,
+            policy = org.osgi.service.component.annotations.ReferencePolicy.DYNAMIC)
+    private volatile org.redward.api.formats.SpectrumInputs inputs;
 
     @CommandLine.Command(name = "accuracy", mixinStandardHelpOptions = true, sortOptions = false,
             description = {"Measure a large invented mock survey with every installed redshift estimator and score them "
@@ -130,7 +133,7 @@ public final class AccuracyCommand implements Command {
             try (var s = Files.list(survey)) {
                 files = s.filter(p -> p.getFileName().toString().endsWith(".fits")).sorted().toList();
             }
-            Measurer m = new Measurer(ctx, readers, templates);
+            Measurer m = new Measurer(ctx, new Services(readers, inputs, estimators, templates));
             Measurer.Result mock = m.measure(files, (f, i) -> byFibre.get(f + "#" + i), chosen, a.threads, truth.size(),
                     "measuring " + truth.size() + " mock spectra with " + chosen.size() + " estimator(s)");
             Measurer.Result real = null;
@@ -138,7 +141,7 @@ public final class AccuracyCommand implements Command {
             if (realDir != null) {
                 realTruth = RealData.read(realDir);
                 List<Path> realFiles = realTruth.stream().map(r -> realDir.resolve(r.file())).toList();
-                real = m.measure(realFiles, (f, i) -> null, chosen, a.threads, realFiles.size(), "measuring the real spectra");
+                real = m.measure(realFiles, (f, i) -> null, chosen, a.threads, -1, "measuring the real spectra");
             }
             Path partial = store.partial("results");
             AccuracyReport report = new AccuracyReport(a.seed, a.size, genSeconds, mock, real, realTruth);

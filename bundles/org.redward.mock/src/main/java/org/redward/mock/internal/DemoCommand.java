@@ -9,6 +9,9 @@ import java.util.Locale;
 
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
@@ -41,6 +44,8 @@ public final class DemoCommand implements Command {
     private EstimatorRegistry estimators;
     @Reference
     private TemplateRegistry templates;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile SpectrumInputs inputs;
 
     @CommandLine.Command(name = "demo", mixinStandardHelpOptions = true, sortOptions = false,
             description = {"Run the whole job on a built-in invented survey (the Ember field seen by the invented Quill "
@@ -94,7 +99,7 @@ public final class DemoCommand implements Command {
             throw new UsageException("demo: --threads " + a.threads + ": at least 1");
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
-        DemoRun run = new DemoRun(ctx, readers, estimators, templates);
+        DemoRun run = new DemoRun(ctx, new Services(readers, inputs, estimators, templates));
         try (SurveyStore store = SurveyStore.open(out)) {
             return run.execute(store, a.seed, a.size, a.fresh, a.estimator, a.threads, a.json);
         } catch (IOException e) {

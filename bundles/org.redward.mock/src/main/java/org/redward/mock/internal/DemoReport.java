@@ -44,14 +44,19 @@ final class DemoReport {
     }
 
     private void addWarningsSummary() {
+        // group the estimators' warnings by their wording with the numbers taken out
         Map<String, Integer> counts = new TreeMap<>();
+        Map<String, String> example = new TreeMap<>();
         for (Row r : rows) {
             for (String w : r.warnings) {
-                counts.merge(w, 1, Integer::sum);
+                String key = w.replaceAll("[-+]?\\d+(\\.\\d+)?", "#");
+                counts.merge(key, 1, Integer::sum);
+                example.putIfAbsent(key, w);
             }
         }
         for (Map.Entry<String, Integer> e : counts.entrySet()) {
-            cautions.add(e.getValue() + " spectra: " + e.getKey());
+            cautions.add(e.getValue() == 1 ? "1 spectrum: " + example.get(e.getKey())
+                    : e.getValue() + " spectra: " + example.get(e.getKey()) + " (and similar)");
         }
     }
 

@@ -37,24 +37,22 @@ import org.redward.spectrum.Spectrum;
 final class DemoRun {
 
     /** Estimator ids preferred as the demo's default, in order; otherwise the first installed id that is not an example. */
-    static final List<String> PREFERRED_ESTIMATORS = List.of("xcorr", "pca-chi2", "chi2", "template", "lines");
+    static final List<String> PREFERRED_ESTIMATORS = List.of("chisq", "xcorr", "lines");
 
     /** A step of the pipeline as reported. */
     record Step(String name, String status, String detail, double seconds) {
     }
 
     private final CommandContext ctx;
-    private final ReaderRegistry readers;
+    private final Services services;
     private final EstimatorRegistry estimators;
-    private final TemplateRegistry templates;
     private final List<Step> steps = new ArrayList<>();
     private final List<String> cautions = new ArrayList<>();
 
-    DemoRun(CommandContext ctx, ReaderRegistry readers, EstimatorRegistry estimators, TemplateRegistry templates) {
+    DemoRun(CommandContext ctx, Services services) {
         this.ctx = ctx;
-        this.readers = readers;
-        this.estimators = estimators;
-        this.templates = templates;
+        this.services = services;
+        this.estimators = services.estimators();
     }
 
     int execute(SurveyStore store, long seed, int size, boolean fresh, String estimatorId, int threads, boolean json)
@@ -91,11 +89,11 @@ final class DemoRun {
         // 2-3. read and measure
         Optional<Provided<RedshiftEstimator>> est = chooseEstimator(estimatorId);
         List<Row> rows = readAndMeasure(survey, truthByFibre, est, threads);
-        // 4-7. frames, distances, catalogue, plots (added as their bundles land)
-        steps.add(new Step("frame corrections", "not available", "no frames bundle in this build", 0));
-        steps.add(new Step("distances", "not available", "no cosmology bundle in this build", 0));
+        // 4-7. frames, distances, catalogue, plots
+        steps.add(new Step("frame corrections", "not available", "no frame-correction service in this build", 0));
+        steps.add(new Step("distances", "not available", "no cosmology service in this build", 0));
         steps.add(new Step("catalogue", "not available", "no catalogue writers in this build", 0));
-        steps.add(new Step("plots", "not available", "no charts bundle in this build", 0));
+        steps.add(plots(results, rows));
         // 8. score and report
         Scorecard card = Scorecard.of(rows.stream().map(Row::outcome).toList());
         DemoReport report = new DemoReport(seed, size, survey, steps, card, rows, cautions, est.map(Provided::toString).orElse(""));
@@ -130,7 +128,7 @@ final class DemoRun {
         try (var s = Files.list(survey)) {
             files = s.filter(p -> p.getFileName().toString().endsWith(".fits")).sorted().toList();
         }
-        Measurer.Result r = new Measurer(ctx, readers, templates).measure(files, (f, i) -> truth.get(f + "#" + i),
+        Measurer.Result r = new Measurer(ctx, services).measure(files, (f, i) -> truth.get(f + "#" + i),
                 est.map(List::of).orElse(List.of()), threads, truth.size(), est.isPresent() ? "reading and measuring" : "reading");
         cautions.addAll(r.notes());
         List<Row> rows = r.rows().values().iterator().next();
@@ -149,6 +147,19 @@ final class DemoRun {
                     + " could not run" : "no redshift estimator installed", 0));
         }
         return rows;
+    }
+
+    private Step plots(Path folder, List<Row> rows) {
+        long t = System.nanoTime();
+        try {
+            List<String> files = DemoPlots.write(folder, rows, null, Double.NaN);
+            return new Step("plots", "done", String.join(", ", files) + (files.contains("hubble-diagram.png") ? ""
+                    : "; no Hubble diagram without distances"), secs(t));
+        } catch (NoClassDefFoundError e) {
+            return new Step("plots", "not available", "no charts bundle installed", 0);
+        } catch (IOException | RuntimeException e) {
+            return new Step("plots", "failed", e.getMessage(), secs(t));
+        }
     }
 
     static double secs(long t0) {

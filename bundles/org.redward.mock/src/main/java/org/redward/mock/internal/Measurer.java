@@ -17,7 +17,8 @@ import java.util.function.BiFunction;
 
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Progress;
-import org.redward.api.formats.ReaderRegistry;
+import org.redward.api.formats.ReadOptions;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.formats.SpectrumReader;
 import org.redward.api.formats.SpectrumRecord;
 import org.redward.api.formats.SpectrumSource;
@@ -42,13 +43,13 @@ final class Measurer {
     }
 
     private final CommandContext ctx;
-    private final ReaderRegistry readers;
+    private final Services services;
     private final TemplateRegistry templates;
 
-    Measurer(CommandContext ctx, ReaderRegistry readers, TemplateRegistry templates) {
+    Measurer(CommandContext ctx, Services services) {
         this.ctx = ctx;
-        this.readers = readers;
-        this.templates = templates;
+        this.services = services;
+        this.templates = services.templates();
     }
 
     Result measure(List<Path> files, BiFunction<String, Integer, TruthRow> truth, List<Provided<RedshiftEstimator>> estimators,
@@ -82,55 +83,48 @@ final class Measurer {
         List<Future<?>> futures = new ArrayList<>();
         int spectra = 0;
         int failures = 0;
-        try (Progress p = ctx.progress(label, expected * Math.max(1, usable.size()))) {
-            for (Path f : files) {
-                Optional<SpectrumReader> reader = chooseReader(f);
-                if (reader.isEmpty()) {
-                    return new Result(rows, spectra, failures, DemoRun.secs(t0), "no installed reader accepts " + f.getFileName(), notes);
+        try (Progress p = ctx.progress(label, expected < 0 ? -1 : expected * Math.max(1, usable.size()))) {
+            try (Records records = records(files)) {
+                if (!records.unavailable.isEmpty()) {
+                    return new Result(rows, spectra, failures, DemoRun.secs(t0), records.unavailable, notes);
                 }
-                String name = f.getFileName().toString();
-                try (SpectrumSource src = reader.get().open(f, Optional.empty())) {
-                    while (src.hasNext()) {
-                        SpectrumRecord rec = src.next();
-                        spectra++;
-                        TruthRow tr = truth.apply(name, rec.index());
-                        Optional<Spectrum> sp = rec.spectrum();
-                        if (!rec.ok()) {
-                            failures++;
-                        }
-                        for (Map.Entry<String, List<Row>> e : rows.entrySet()) {
-                            Row row = new Row(name, rec.index(), sp.flatMap(s -> s.metadata().objectId()).orElse(""), tr,
-                                    sp.map(Spectrum::metadata).orElse(null));
-                            e.getValue().add(row);
-                            if (!rec.ok()) {
-                                row.error = rec.error();
-                                p.advance(1);
-                                continue;
-                            }
-                            if (e.getKey().isEmpty()) {
-                                p.advance(1);
-                                continue;
-                            }
-                            RedshiftEstimator est = usable.stream().filter(u -> u.id().equals(e.getKey())).findFirst().get().service();
-                            EstimationContext ec = contexts.get(e.getKey());
-                            Spectrum s = sp.get();
-                            inFlight.acquireUninterruptibly();
-                            futures.add(pool.submit(() -> {
-                                try {
-                                    fill(row, est.estimate(s, ec));
-                                } catch (RuntimeException ex) {
-                                    row.error = "estimator failed: " + ex;
-                                } finally {
-                                    inFlight.release();
-                                    p.advance(1);
-                                }
-                            }));
-                        }
+                while (records.hasNext()) {
+                    SpectrumRecord rec = records.next();
+                    String name = rec.file().getFileName().toString();
+                    spectra++;
+                    TruthRow tr = truth.apply(name, rec.index());
+                    Optional<Spectrum> sp = rec.spectrum();
+                    if (!rec.ok()) {
+                        failures++;
                     }
-                } catch (IOException ex) {
-                    throw new IOException(f + ": " + ex.getMessage(), ex);
-                } catch (Exception ex) {
-                    throw new IOException(f + ": cannot be read (" + ex.getMessage() + ")", ex);
+                    for (Map.Entry<String, List<Row>> e : rows.entrySet()) {
+                        Row row = new Row(name, rec.index(), sp.flatMap(s -> s.metadata().objectId()).orElse(""), tr,
+                                sp.map(Spectrum::metadata).orElse(null));
+                        e.getValue().add(row);
+                        if (!rec.ok()) {
+                            row.error = rec.error();
+                            p.advance(1);
+                            continue;
+                        }
+                        if (e.getKey().isEmpty()) {
+                            p.advance(1);
+                            continue;
+                        }
+                        RedshiftEstimator est = usable.stream().filter(u -> u.id().equals(e.getKey())).findFirst().get().service();
+                        EstimationContext ec = contexts.get(e.getKey());
+                        Spectrum s = sp.get();
+                        inFlight.acquireUninterruptibly();
+                        futures.add(pool.submit(() -> {
+                            try {
+                                fill(row, est.estimate(s, ec));
+                            } catch (RuntimeException ex) {
+                                row.error = "estimator failed: " + ex;
+                            } finally {
+                                inFlight.release();
+                                p.advance(1);
+                            }
+                        }));
+                    }
                 }
             }
             for (Future<?> fu : futures) {
@@ -146,6 +140,58 @@ final class Measurer {
         return new Result(rows, spectra, failures, DemoRun.secs(t0), "", notes);
     }
 
+    /** Spectra of the files: through the reading facade when installed (profiles matched), else through the best-sniffing reader. */
+    private Records records(List<Path> files) throws IOException {
+        if (services.inputs() != null) {
+            SpectrumInputs.Stream st = services.inputs().open(files, ReadOptions.defaults());
+            return new Records(st, st::close, "");
+        }
+        List<SpectrumRecord> all = new ArrayList<>();
+        for (Path f : files) {
+            Optional<SpectrumReader> reader = chooseReader(f);
+            if (reader.isEmpty()) {
+                return new Records(all.iterator(), () -> { }, "no installed reader accepts " + f.getFileName());
+            }
+            // without the facade, one file at a time is read whole (the demo's files are small)
+            try (SpectrumSource src = reader.get().open(f, Optional.empty())) {
+                while (src.hasNext()) {
+                    all.add(src.next());
+                }
+            } catch (Exception ex) {
+                throw new IOException(f + ": cannot be read (" + ex.getMessage() + ")", ex);
+            }
+        }
+        return new Records(all.iterator(), () -> { }, "");
+    }
+
+    /** An iterator of records with a close action. */
+    private static final class Records implements java.util.Iterator<SpectrumRecord>, AutoCloseable {
+        final java.util.Iterator<SpectrumRecord> it;
+        final Runnable close;
+        final String unavailable;
+
+        Records(java.util.Iterator<SpectrumRecord> it, Runnable close, String unavailable) {
+            this.it = it;
+            this.close = close;
+            this.unavailable = unavailable;
+        }
+
+        @Override
+        public boolean hasNext() {
+            return it.hasNext();
+        }
+
+        @Override
+        public SpectrumRecord next() {
+            return it.next();
+        }
+
+        @Override
+        public void close() {
+            close.run();
+        }
+    }
+
     private Optional<SpectrumReader> chooseReader(Path f) throws IOException {
         byte[] head;
         try (InputStream in = Files.newInputStream(f)) {
@@ -153,7 +199,7 @@ final class Measurer {
         }
         SpectrumReader best = null;
         int bestScore = 0;
-        for (Provided<SpectrumReader> r : readers.providers()) {
+        for (Provided<SpectrumReader> r : services.readers().providers()) {
             int s = r.service().sniff(f, head);
             if (s > bestScore) {
                 best = r.service();
