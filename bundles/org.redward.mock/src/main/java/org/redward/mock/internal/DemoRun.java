@@ -36,8 +36,11 @@ import org.redward.spectrum.Spectrum;
 /** One run of the demo: the steps in order, their status and timing, and the summary. Not thread-safe. */
 final class DemoRun {
 
-    /** Estimator ids preferred as the demo's default, in order; otherwise the first installed id that is not an example. */
-    static final List<String> PREFERRED_ESTIMATORS = List.of("chisq", "xcorr", "lines");
+    /**
+     * Estimator ids preferred as the demo's default, in order (the first is the measuring
+     * pipeline's default too); otherwise the first installed id that is not an example.
+     */
+    static final List<String> PREFERRED_ESTIMATORS = List.of("xcorr", "chisq", "lines");
 
     /** A step of the pipeline as reported. */
     record Step(String name, String status, String detail, double seconds) {
@@ -96,6 +99,11 @@ final class DemoRun {
         steps.add(plots(results, rows));
         // 8. score and report
         Scorecard card = Scorecard.of(rows.stream().map(Row::outcome).toList());
+        List<String> others = estimators.ids().stream().filter(i -> est.isEmpty() || !i.equals(est.get().id())).toList();
+        if (!others.isEmpty()) {
+            cautions.add("other estimators installed: " + String.join(", ", others)
+                    + "; choose one with --estimator ID, or compare them all with 'redward accuracy'");
+        }
         DemoReport report = new DemoReport(seed, size, survey, steps, card, rows, cautions, est.map(Provided::toString).orElse(""));
         report.writeMarkdown(results.resolve("report.md"));
         Path published = store.publish(results, "results");
