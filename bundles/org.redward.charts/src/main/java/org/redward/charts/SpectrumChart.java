@@ -176,7 +176,7 @@ public final class SpectrumChart {
         y.setRange(fluxRange);
         x.setRange(wl[0], wl[n - 1]);
 
-        if (!found.isEmpty()) {
+        {
             XYSeries em = new XYSeries("found (emission)", false, true);
             XYSeries ab = new XYSeries("found (absorption)", false, true);
             double offset = 0.04 * fluxRange.getLength();
@@ -197,9 +197,12 @@ public final class SpectrumChart {
             r.setSeriesShape(1, triangle(false));
             r.setSeriesPaint(0, ChartStyle.DETECTED);
             r.setSeriesPaint(1, ChartStyle.DETECTED);
+            // always present: markers of index 0 are drawn only where dataset 0 has a renderer
             plot.setDataset(FOUND, foundData);
             plot.setRenderer(FOUND, r);
-            legend.add(new LegendItem("line found", null, null, null, triangle(true), ChartStyle.DETECTED));
+            if (!found.isEmpty()) {
+                legend.add(new LegendItem("line found", null, null, null, triangle(true), ChartStyle.DETECTED));
+            }
         }
 
         for (double[] run : maskedRuns(wl, mask)) {
@@ -358,8 +361,10 @@ public final class SpectrumChart {
     }
 
     /**
-     * The flux range shown: the 0.5th to 99.5th percentile of usable pixels, widened by 8% below
-     * and 22% above (room for line labels). A spectrum with no usable pixel gives [0, 1].
+     * The flux range shown: from the 0.5th percentile of usable pixels less 8% of the 0.5-99.5
+     * percentile span, up to the highest usable pixel but at most three spans above the 99.5th
+     * percentile (strong emission lines stay in view, a lone cosmic ray does not flatten the
+     * spectrum), plus 15% room for line labels. A spectrum with no usable pixel gives [0, 1].
      */
     static Range robustRange(double[] flux, boolean[] mask) {
         double[] v = new double[flux.length];
@@ -380,7 +385,9 @@ public final class SpectrumChart {
         if (!(span > 0)) {
             span = Math.max(Math.abs(hi), 1.0);
         }
-        return new Range(lo - 0.08 * span, hi + 0.22 * span);
+        double top = Math.min(v[m - 1], hi + 3 * span);
+        top = Math.max(top, hi);
+        return new Range(lo - 0.08 * span, top + 0.15 * (top - lo));
     }
 
     private static Range skyRange(double[] sky) {
