@@ -19,6 +19,7 @@ import org.jfree.chart.plot.Marker;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.DeviationRenderer;
+import org.jfree.chart.renderer.xy.SamplingXYLineRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.ui.Layer;
 import org.jfree.chart.ui.RectangleAnchor;
@@ -129,8 +130,9 @@ public final class SpectrumChart {
 
         NumberAxis x = new NumberAxis("Observed wavelength, vacuum (Å)");
         NumberAxis y = new NumberAxis(spectrum.fluxUnit().isBlank() ? "Flux" : "Flux (" + spectrum.fluxUnit() + ")");
-        XYLineAndShapeRenderer fluxRenderer = new XYLineAndShapeRenderer(true, false);
-        fluxRenderer.setDrawSeriesLineAsPath(true);
+        // draws at most a few points per pixel column (min and max), so a 4,000-pixel spectrum costs
+        // what its width on screen costs; gaps at masked pixels are kept
+        SamplingXYLineRenderer fluxRenderer = new SamplingXYLineRenderer();
         fluxRenderer.setSeriesPaint(0, ChartStyle.FLUX);
         fluxRenderer.setSeriesStroke(0, ChartStyle.THIN);
         XYPlot plot = new XYPlot(null, x, y, null);
@@ -164,8 +166,7 @@ public final class SpectrumChart {
             plot.setRangeAxis(1, skyAxis);
             plot.setDataset(SKY, new XYSeriesCollection(s));
             plot.mapDatasetToRangeAxis(SKY, 1);
-            XYLineAndShapeRenderer skyRenderer = new XYLineAndShapeRenderer(true, false);
-            skyRenderer.setDrawSeriesLineAsPath(true);
+            SamplingXYLineRenderer skyRenderer = new SamplingXYLineRenderer();
             skyRenderer.setSeriesPaint(0, ChartStyle.withAlpha(ChartStyle.SKY, 170));
             skyRenderer.setSeriesStroke(0, ChartStyle.THIN);
             plot.setRenderer(SKY, skyRenderer);
@@ -310,22 +311,41 @@ public final class SpectrumChart {
         }
     }
 
+    /**
+     * The 1-sigma band as one series (one polygon: cheap to draw). Over masked pixels the band
+     * closes to zero width on the line joining the nearest usable pixels, so no value of a bad
+     * pixel is shown.
+     */
     private static YIntervalSeriesCollection band(double[] wl, double[] flux, double[] ivar, boolean[] mask) {
         YIntervalSeriesCollection c = new YIntervalSeriesCollection();
-        YIntervalSeries current = null;
-        int k = 0;
-        for (int i = 0; i < wl.length; i++) {
-            if (mask[i] || !(ivar[i] > 0)) {
-                current = null;
+        YIntervalSeries s = new YIntervalSeries("band", false, true);
+        int n = wl.length;
+        int prev = -1;
+        for (int i = 0; i < n; i++) {
+            boolean good = !mask[i] && ivar[i] > 0;
+            if (good) {
+                double sigma = 1.0 / Math.sqrt(ivar[i]);
+                s.add(new org.jfree.data.xy.YIntervalDataItem(wl[i], flux[i], flux[i] - sigma, flux[i] + sigma), false);
+                prev = i;
                 continue;
             }
-            if (current == null) {
-                current = new YIntervalSeries("band" + k++, false, true);
-                c.addSeries(current);
+            int next = i + 1;
+            while (next < n && (mask[next] || !(ivar[next] > 0))) {
+                next++;
             }
-            double sigma = 1.0 / Math.sqrt(ivar[i]);
-            current.add(new org.jfree.data.xy.YIntervalDataItem(wl[i], flux[i], flux[i] - sigma, flux[i] + sigma), false);
+            double y;
+            if (prev < 0 && next >= n) {
+                return c;
+            } else if (prev < 0) {
+                y = flux[next];
+            } else if (next >= n) {
+                y = flux[prev];
+            } else {
+                y = flux[prev] + (flux[next] - flux[prev]) * (wl[i] - wl[prev]) / (wl[next] - wl[prev]);
+            }
+            s.add(new org.jfree.data.xy.YIntervalDataItem(wl[i], y, y, y), false);
         }
+        c.addSeries(s);
         return c;
     }
 

@@ -1082,6 +1082,16 @@ final class WorkbenchWindow {
         showCurrent();
     }
 
+    /** The item whose spectrum is on screen (or being read). */
+    QueueItem shownItem() {
+        return shown;
+    }
+
+    /** True while the item on screen is still being read or estimated. */
+    boolean drawPending() {
+        return shown != null && pending.contains(shown);
+    }
+
     /** True while work is queued or running on the worker (tests wait for it). */
     boolean busy() {
         return !pending.isEmpty();
