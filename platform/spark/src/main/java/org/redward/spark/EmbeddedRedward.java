@@ -85,12 +85,18 @@ public final class EmbeddedRedward {
         try {
             String f = "(&(objectClass=" + type.getName() + ")" + (filter == null ? "" : filter) + ")";
             ServiceTracker<T, T> tracker = new ServiceTracker<>(bc, FrameworkUtil.createFilter(f), null);
-            tracker.open();
-            T s = tracker.waitForService(15_000);
+            tracker.open(true);
+            Object found = tracker.waitForService(15_000);
+            if (found != null && !type.isInstance(found)) {
+                throw new IllegalStateException(type.getName() + " of the bundles (loaded by " + found.getClass().getClassLoader()
+                        + ") is not the class of the job (loaded by " + type.getClassLoader() + "): the API jar is installed twice?");
+            }
+            T s = type.cast(found);
             if (s == null) {
                 throw new IllegalStateException("no " + type.getSimpleName() + (filter == null ? "" : " " + filter)
                         + " service in the embedded platform booted from " + bundleFolder
-                        + (problems.isEmpty() ? " (is its bundle in that folder?)" : "; problems: " + String.join("; ", problems)));
+                        + (problems.isEmpty() ? " (is its bundle in that folder?)" : "; problems: " + String.join("; ", problems))
+                        + notActive());
             }
             return s;
         } catch (InterruptedException e) {
@@ -99,6 +105,36 @@ public final class EmbeddedRedward {
         } catch (org.osgi.framework.InvalidSyntaxException e) {
             throw new IllegalArgumentException(e.getMessage(), e);
         }
+    }
+
+    /** The bundles that are not active, with the reason the framework gives when it cannot resolve them. */
+    private String notActive() {
+        StringBuilder sb = new StringBuilder();
+        for (Bundle b : framework.getBundleContext().getBundles()) {
+            if (b.getState() != Bundle.ACTIVE && b.getHeaders().get(Constants.FRAGMENT_HOST) == null) {
+                String why = "";
+                try {
+                    b.start();
+                } catch (BundleException e) {
+                    why = ": " + e.getMessage();
+                }
+                sb.append("; bundle ").append(b.getSymbolicName()).append(" is not active").append(why);
+            }
+        }
+        try {
+            org.osgi.framework.ServiceReference<?>[] refs = framework.getBundleContext().getAllServiceReferences(null, null);
+            int n = refs == null ? 0 : refs.length;
+            sb.append("; ").append(n).append(" services registered");
+            if (Boolean.getBoolean("redward.spark.debug") && refs != null) {
+                for (org.osgi.framework.ServiceReference<?> r : refs) {
+                    sb.append("\n  ").append(java.util.Arrays.toString((String[]) r.getProperty(Constants.OBJECTCLASS)))
+                            .append(" from ").append(r.getBundle().getSymbolicName());
+                }
+            }
+        } catch (org.osgi.framework.InvalidSyntaxException e) {
+            // cannot happen without a filter
+        }
+        return sb.toString();
     }
 
     private static EmbeddedRedward boot(Path folder) {
