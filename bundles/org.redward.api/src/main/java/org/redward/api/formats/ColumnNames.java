@@ -22,7 +22,7 @@ public final class ColumnNames {
     public static final List<String> MASK = List.of("mask", "badpix", "bad_pixel", "pixel_mask", "bad");
     /** A column that numbers the spectra of a file holding several, one row per pixel. */
     public static final List<String> SPECTRUM_INDEX = List.of("spectrum", "spectrum_index", "spec_index");
-    public static final List<String> ID = List.of("object_id", "objid", "targetid", "target_id", "id", "name", "object", "objname");
+    public static final List<String> ID = List.of("object_id", "obj_id", "objid", "targetid", "target_id", "id", "name", "object", "objname");
 
     private ColumnNames() {
     }

@@ -56,6 +56,8 @@ final class TableSpectra implements Plan {
     private Optional<Column> maskCol;
     private Optional<Column> wave;
     private Optional<Column> idCol;
+    private Optional<Column> raCol;
+    private Optional<Column> decCol;
 
     private TableSpectra(FitsFileView view, List<Integer> hdus, boolean rowPerSpectrum, Settings settings, String layout) {
         this.view = view;
@@ -285,6 +287,11 @@ final class TableSpectra implements Plan {
         maskCol = pick(names, settings, "mask.column", ColumnNames.MASK, where);
         wave = pick(names, settings, "wavelength.column", ColumnNames.WAVELENGTH, where);
         idCol = rowPerSpectrum ? pick(names, settings, "id.column", ColumnNames.ID, where) : Optional.empty();
+        // one object per row: its own sky position (ICRS degrees) beats the header's pointing
+        raCol = rowPerSpectrum ? pick(names, settings, "ra.column", List.of("ra", "ra_obj", "plug_ra", "target_ra"), where)
+                : Optional.empty();
+        decCol = rowPerSpectrum ? pick(names, settings, "dec.column", List.of("dec", "dec_obj", "plug_dec", "target_dec"), where)
+                : Optional.empty();
     }
 
     private Spectrum finish(org.redward.spectrum.SpectralAxis axis, Header h, BinaryTable t, Keys keys, double[] f, double[] e,
@@ -306,6 +313,13 @@ final class TableSpectra implements Plan {
         }
         SpectrumMetadata.Builder b = own ? md.toBuilder() : md.toBuilder().extra("redward.medium_source", mediumSource);
         if (row >= 0 && !own) {
+            if (raCol.isPresent() && decCol.isPresent()) {
+                double ra = column(t, h, raCol.get(), row)[0];
+                double dec = column(t, h, decCol.get(), row)[0];
+                if (Double.isFinite(ra) && Double.isFinite(dec) && Math.abs(dec) <= 90) {
+                    b.skyPosition(((ra % 360) + 360) % 360, dec);
+                }
+            }
             if (idCol.isPresent()) {
                 Object v = t.getElement(row, idCol.get().index());
                 String s = text(v);
