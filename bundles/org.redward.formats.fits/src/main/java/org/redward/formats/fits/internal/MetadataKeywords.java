@@ -16,7 +16,8 @@ import org.redward.spectrum.SpectrumMetadata;
  * metres); otherwise common keywords are tried in order. Numbers in RA keywords are degrees
  * (FITS convention) unless the card's comment or the profile says hours; sexagesimal text RA is
  * hours. The mid-exposure time is MJD-OBS plus half of EXPTIME, or DATE-OBS (with a time of
- * day) plus half of EXPTIME, unless the DATE-OBS comment says it is already the median.
+ * day) plus half of EXPTIME, unless the DATE-OBS comment says it is already the median; MJD-AVG
+ * (the FITS Standard's mid-exposure keyword) wins over both.
  */
 final class MetadataKeywords {
 
@@ -50,8 +51,11 @@ final class MetadataKeywords {
             b.exposureSeconds(exp);
         }
         double half = Double.isFinite(exp) ? exp / 2.0 / 86400.0 : 0.0;
+        Optional<Double> mjdAvg = k.number("MJD-AVG");
         Optional<Double> mjdObs = k.number("MJD-OBS");
-        if (mjdObs.isPresent() && mjdObs.get() > 0) {
+        if (mjdAvg.isPresent() && mjdAvg.get() > 0) {
+            b.midExposureMjdUtc(mjdAvg.get());
+        } else if (mjdObs.isPresent() && mjdObs.get() > 0) {
             b.midExposureMjdUtc(mjdObs.get() + half);
         } else {
             k.text("DATE-OBS").ifPresent(d -> {
