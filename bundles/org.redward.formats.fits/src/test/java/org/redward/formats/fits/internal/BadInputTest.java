@@ -23,7 +23,6 @@ import nom.tam.fits.BinaryTable;
 import nom.tam.fits.BinaryTableHDU;
 import nom.tam.fits.Fits;
 import nom.tam.fits.ImageHDU;
-import nom.tam.util.FitsOutputStream;
 
 /** The bad inputs of the issue, each with a clear error naming the file, HDU and column. */
 class BadInputTest {
@@ -60,14 +59,7 @@ class BadInputTest {
     }
 
     Path write(String name, nom.tam.fits.BasicHDU<?>... hdus) throws Exception {
-        Path p = dir.resolve(name);
-        try (Fits f = new Fits(); FitsOutputStream out = new FitsOutputStream(Files.newOutputStream(p))) {
-            for (nom.tam.fits.BasicHDU<?> h : hdus) {
-                f.addHDU(h);
-            }
-            f.write(out);
-        }
-        return p;
+        return TestFiles.write(dir, name, hdus);
     }
 
     static String error(Path p, Optional<InstrumentProfile> profile) {

@@ -17,7 +17,6 @@ import nom.tam.fits.BinaryTable;
 import nom.tam.fits.BinaryTableHDU;
 import nom.tam.fits.Fits;
 import nom.tam.fits.ImageHDU;
-import nom.tam.util.FitsOutputStream;
 
 /** Files of many spectra (synthetic values: a format test): one per table row, one per image row. */
 class MultiObjectTest {
@@ -26,14 +25,7 @@ class MultiObjectTest {
     Path dir;
 
     Path write(String name, nom.tam.fits.BasicHDU<?>... hdus) throws Exception {
-        Path p = dir.resolve(name);
-        try (Fits f = new Fits(); FitsOutputStream out = new FitsOutputStream(Files.newOutputStream(p))) {
-            for (nom.tam.fits.BasicHDU<?> h : hdus) {
-                f.addHDU(h);
-            }
-            f.write(out);
-        }
-        return p;
+        return TestFiles.write(dir, name, hdus);
     }
 
     @Test

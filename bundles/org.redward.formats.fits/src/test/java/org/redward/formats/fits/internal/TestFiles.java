@@ -32,6 +32,18 @@ final class TestFiles {
         return p;
     }
 
+    /** A file of the given HDUs (the first becomes the primary). */
+    static Path write(Path dir, String name, nom.tam.fits.BasicHDU<?>... hdus) throws Exception {
+        Path p = dir.resolve(name);
+        try (Fits f = new Fits(); FitsOutputStream out = new FitsOutputStream(java.nio.file.Files.newOutputStream(p))) {
+            for (nom.tam.fits.BasicHDU<?> h : hdus) {
+                f.addHDU(h);
+            }
+            f.write(out);
+        }
+        return p;
+    }
+
     static void addCards(Header h, Object... cards) throws Exception {
         for (int i = 0; i < cards.length; i += 2) {
             String k = (String) cards[i];
