@@ -182,6 +182,14 @@ class PublishedValuesTest {
     }
 
     @Test
+    void photonDensity() {
+        // Omega_gamma h^2 = 2.47e-5 for T_CMB = 2.7255 K (common practice; the value 2.4728e-5 is from memory).
+        assertEquals(2.4728e-5, CosmologyParameters.photonDensity(100, 2.7255), 0.0005e-5);
+        // (7/8)(4/11)^(4/3) = 0.2271073 per massless neutrino species (the constant astropy's tests also use, 0.22710731766).
+        assertEquals(0.22710731766, CosmologyParameters.NEUTRINO_PER_PHOTON, 1e-10);
+    }
+
+    @Test
     void ladderSetHasRiessH0() {
         // Riess et al. (2022), abstract: H0 = 73.04 +- 1.04.
         assertEquals(73.04, NamedSets.LADDER2022.h0(), 0);
