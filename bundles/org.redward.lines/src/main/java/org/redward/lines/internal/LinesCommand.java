@@ -12,6 +12,7 @@ import org.osgi.service.component.annotations.Reference;
 import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
+import org.redward.api.commands.Progress;
 import org.redward.api.commands.UsageException;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.ProfileRegistry;
@@ -109,9 +110,10 @@ public final class LinesCommand implements Command {
         }
         ReadOptions ro = ReadOptions.defaults().withProfile(a.profile).withReader(a.reader);
         int failures = 0;
-        try (SpectrumInputs.Stream stream = inputs.open(paths, ro)) {
+        try (SpectrumInputs.Stream stream = inputs.open(paths, ro); Progress progress = ctx.progress("lines", -1)) {
             while (stream.hasNext()) {
                 SpectrumRecord rec = stream.next();
+                progress.advance(1);
                 if (!rec.ok()) {
                     ctx.err().println("redward lines: " + rec.error());
                     failures++;
