@@ -246,6 +246,7 @@ public final class LinesCommand implements Command {
                     .put("flux", d.flux()).put("flux_err", d.fluxError())
                     .put("equivalent_width_angstrom", d.equivalentWidthAngstrom())
                     .put("equivalent_width_err_angstrom", d.equivalentWidthErrorAngstrom())
+                    .put("rest_equivalent_width_angstrom", m == null ? null : d.equivalentWidthAngstrom() / (1 + m.z()))
                     .put("continuum", d.continuum())
                     .put("blend", d.blended() ? d.blend() : null)
                     .put("line", m == null ? null : LineRedshift.label(m))
