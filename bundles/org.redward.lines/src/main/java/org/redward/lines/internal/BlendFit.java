@@ -17,8 +17,8 @@ import org.apache.commons.math3.util.Pair;
  * continuum-subtracted flux of a window of pixels (weights applied by scaling model and data by
  * sqrt(ivar), the same problem as a diagonal weight matrix but cheaper):
  * <pre>model(lambda) = b + sum_k A_k exp(-(lambda - mu_k)^2 / (2 s_k^2))</pre>
- * with weights equal to the inverse variance, solved by Levenberg-Marquardt (Moré 1978, Lecture
- * Notes in Mathematics 630, 105; Commons Math {@link LevenbergMarquardtOptimizer}) with the
+ * with weights equal to the inverse variance, solved by Levenberg-Marquardt (Moré 1978, in
+ * Numerical Analysis, Springer LNM 630, 105; Commons Math {@link LevenbergMarquardtOptimizer}) with the
  * analytic Jacobian. The 1-sigma errors are the square roots of the diagonal of the covariance
  * (J^T W J)^-1 at the optimum (common practice for Gaussian noise with correct variances).
  * Parameters are kept in bounds (sign of A, centre inside the window, width between bounds)

@@ -120,7 +120,8 @@ final class LineRedshift {
         return b.build();
     }
 
-    private static String label(LineMatch m) {
+    /** The name of a match: the line, or its group for an unresolved doublet. */
+    static String label(LineMatch m) {
         return m.note().isEmpty() ? m.line().name() : m.line().group() + " (unresolved)";
     }
 

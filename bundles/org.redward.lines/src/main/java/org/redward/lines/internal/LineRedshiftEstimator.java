@@ -1,5 +1,7 @@
 package org.redward.lines.internal;
 
+import org.osgi.framework.BundleContext;
+import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.redward.api.lines.LineList;
@@ -24,24 +26,35 @@ public final class LineRedshiftEstimator implements RedshiftEstimator {
     static final String LIST_PARAMETER = "linelist";
 
     @Reference
-    private LineListRegistry lists;
+    LineListRegistry lists;
 
     private final LineRedshift core = new LineRedshift();
+    private volatile String bundle = "org.redward.lines";
+    private volatile String version = "";
+
+    @Activate
+    void activate(BundleContext context) {
+        bundle = context.getBundle().getSymbolicName();
+        version = context.getBundle().getVersion().toString();
+    }
 
     @Override
     public RedshiftSolution estimate(Spectrum spectrum, EstimationContext context) {
         String want = context.parameters().getOrDefault(LIST_PARAMETER, LineListRegistry.STANDARD);
-        LineList list = lists.find(want).map(Provided::service).orElse(null);
-        if (list == null) {
-            if (!want.equals(LineListRegistry.STANDARD)) {
-                return RedshiftSolution.failed("no line list with id '" + want + "' (available: " + String.join(", ", lists.ids()) + ")");
+        LineListRegistry registry = lists;
+        LineList list = registry == null ? null : registry.find(want).map(Provided::service).orElse(null);
+        RedshiftSolution sol;
+        if (list == null && !want.equals(LineListRegistry.STANDARD)) {
+            sol = RedshiftSolution.failed("no line list with id '" + want + "' (available: "
+                    + (registry == null ? "standard" : String.join(", ", registry.ids())) + ")");
+        } else {
+            try {
+                sol = core.estimate(spectrum, context, list == null ? LineListFile.standard() : list);
+            } catch (RuntimeException e) {
+                sol = RedshiftSolution.failed("line-based estimate failed: " + e);
             }
-            list = LineListFile.standard();
         }
-        try {
-            return core.estimate(spectrum, context, list);
-        } catch (RuntimeException e) {
-            return RedshiftSolution.failed("line-based estimate failed: " + e);
-        }
+        return sol.toBuilder().provenance("estimator", ID).provenance("estimator_bundle", bundle)
+                .provenance("estimator_version", version).build();
     }
 }

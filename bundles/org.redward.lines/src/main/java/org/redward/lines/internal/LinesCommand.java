@@ -12,6 +12,7 @@ import org.osgi.service.component.annotations.Reference;
 import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
+import org.redward.api.commands.Progress;
 import org.redward.api.commands.UsageException;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.ProfileRegistry;
@@ -109,9 +110,10 @@ public final class LinesCommand implements Command {
         }
         ReadOptions ro = ReadOptions.defaults().withProfile(a.profile).withReader(a.reader);
         int failures = 0;
-        try (SpectrumInputs.Stream stream = inputs.open(paths, ro)) {
+        try (SpectrumInputs.Stream stream = inputs.open(paths, ro); Progress progress = ctx.progress("lines", -1)) {
             while (stream.hasNext()) {
                 SpectrumRecord rec = stream.next();
+                progress.advance(1);
                 if (!rec.ok()) {
                     ctx.err().println("redward lines: " + rec.error());
                     failures++;
@@ -244,9 +246,10 @@ public final class LinesCommand implements Command {
                     .put("flux", d.flux()).put("flux_err", d.fluxError())
                     .put("equivalent_width_angstrom", d.equivalentWidthAngstrom())
                     .put("equivalent_width_err_angstrom", d.equivalentWidthErrorAngstrom())
+                    .put("rest_equivalent_width_angstrom", m == null ? null : d.equivalentWidthAngstrom() / (1 + m.z()))
                     .put("continuum", d.continuum())
                     .put("blend", d.blended() ? d.blend() : null)
-                    .put("line", m == null ? null : m.note().isEmpty() ? m.line().name() : m.line().group() + " (unresolved)")
+                    .put("line", m == null ? null : LineRedshift.label(m))
                     .put("rest_wavelength_angstrom", m == null ? null : m.restAngstrom())
                     .put("z", m == null ? null : m.z())
                     .put("z_err", m == null ? null : m.zError())
@@ -281,7 +284,7 @@ public final class LinesCommand implements Command {
         for (int i = 0; i < ls.lines().size(); i++) {
             DetectedLine d = ls.lines().get(i);
             LineMatch m = best == null ? null : best.matchOf(i);
-            String name = m == null ? "-" : m.note().isEmpty() ? m.line().name() : m.line().group() + " (unresolved)";
+            String name = m == null ? "-" : LineRedshift.label(m);
             out.printf(Locale.ROOT, "  %10.2f %6.2f %-4s %6.1f %9.0f %8.2f %10.4g %-22s %9s %9s %7s%s%n", d.centreAngstrom(),
                     d.centreErrorAngstrom(), d.kind().key().substring(0, 4), d.snr(), d.fwhmKmPerS(), d.equivalentWidthAngstrom(),
                     d.flux(), name, m == null ? "" : String.format(Locale.ROOT, "%.3f", m.restAngstrom()),
@@ -291,7 +294,7 @@ public final class LinesCommand implements Command {
         if (id.singleLine() && !is.hasFixedZ()) {
             out.println("  candidate identities of the single line:");
             for (LineMatch m : id.singleLineCandidates()) {
-                out.printf(Locale.ROOT, "    %-24s rest %9.3f A  z = %.5f%n", m.note().isEmpty() ? m.line().name() : m.line().group() + " (unresolved)",
+                out.printf(Locale.ROOT, "    %-24s rest %9.3f A  z = %.5f%n", LineRedshift.label(m),
                         m.restAngstrom(), m.z());
             }
         } else if (id.hypotheses().size() > 1 && !is.hasFixedZ()) {

@@ -112,4 +112,26 @@ class IdentificationTest {
         assertEquals(ObjectClass.GALAXY, sol.objectClass());
         assertEquals(6.0, sol.diagnostics().get("lines_matched"));
     }
+
+    /**
+     * A radio spectrum on a frequency axis (invented): H I emission at z = 0.01 is observed at
+     * 1420.405751768 / 1.01 MHz (rest frequency: Hellwig et al. 1970). The estimator finds it,
+     * gives z = 0.01 from the 21-cm line, and warns that one line carries the redshift.
+     */
+    @Test
+    void hydrogen21cmOnAFrequencyAxis() {
+        int n = 1500;
+        double stepMhz = 0.02; // about 4.2 km/s per channel
+        double startMhz = 1420.405751768 / 1.01 - n / 2.0 * stepMhz;
+        var axis = org.redward.spectrum.SpectralAxis.linear(startMhz, stepMhz, n, org.redward.spectrum.SpectralUnit.MEGAHERTZ,
+                org.redward.spectrum.Medium.VACUUM);
+        double z = 0.01;
+        double obsAngstrom = 2.11061140542e9 * (1 + z); // lambda = c / nu = 21.1061140542 cm
+        Spectrum s = Synthetic.spectrum(axis, 1.0, new double[][] {{obsAngstrom, 0.5, 150}}, 0.03, new Random(21), true);
+        RedshiftSolution sol = new LineRedshift().estimate(s, EstimationContext.defaults(), list);
+        assertTrue(sol.ok(), sol.error());
+        assertEquals(z, sol.z(), 5e-6);
+        assertTrue(sol.subclass().contains("H I 21 cm"), sol.subclass());
+        assertTrue(sol.warnings().stream().anyMatch(w -> w.contains("single line")), sol.warnings().toString());
+    }
 }

@@ -73,20 +73,14 @@ class LineListFileTest {
         assertFalse(line("[O II] 3727").fixedRatio(), "[O II] ratio depends on density");
     }
 
+    /** Kinds as the trade uses them (common practice); sources, sorting and checksum are checked by StandardListContractTest. */
     @Test
-    void everyLineNamesItsSourceAndKind() {
+    void kinds() {
         assertEquals("standard", list.id());
-        assertEquals(64, list.checksum().length());
-        for (SpectralLine l : list.lines()) {
-            assertFalse(l.source().isBlank(), l.name() + " has no source");
-        }
         assertEquals(LineKind.ABSORPTION, line("Ca II K").kind());
         assertEquals(LineKind.EMISSION, line("[O III] 5008").kind());
         assertEquals(LineKind.BOTH, line("H-alpha").kind());
         assertTrue(line("C IV 1548").broad());
-        for (int i = 1; i < list.lines().size(); i++) {
-            assertTrue(list.lines().get(i).vacuumAngstrom() >= list.lines().get(i - 1).vacuumAngstrom(), "sorted");
-        }
     }
 
     @Test

@@ -39,6 +39,8 @@ class RealDataTest {
             "spec-2114-53848-0443.fits, 300",
             "spec-55862-B6212_sp06-093.fits, 100",
             "spec-55862-B6212_sp06-114.fits, 100",
+            "spec-0266-51630-0367.fits, 100",
+            "spec-0266-51630-0481.fits, 100",
     })
     void lineRedshiftMatchesThePublishedOne(String file, double toleranceKmPerS) throws Exception {
         Map<String, Double> truth = RealSpectra.publishedZ();
