@@ -71,6 +71,10 @@ public final class Main {
             err.println("redward: " + e.getMessage());
             return 2;
         }
+        if (!options.debug) {
+            System.setErr(new PrintStream(new OneLineErrors(System.err), true, java.nio.charset.StandardCharsets.UTF_8));
+        }
+        err = System.err;
         Path home = productHome();
         Properties conf = loadConfiguration(home);
         for (Path dir : options.dropInFolders) {

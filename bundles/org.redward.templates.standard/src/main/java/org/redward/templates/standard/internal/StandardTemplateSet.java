@@ -1,20 +1,16 @@
 package org.redward.templates.standard.internal;
 
-import java.nio.ByteBuffer;
-import java.nio.charset.StandardCharsets;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
 import java.util.List;
 
 import org.osgi.service.component.annotations.Component;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.Template;
 import org.redward.api.templates.TemplateSet;
+import org.redward.api.templates.TemplateSets;
 
 /**
  * The standard template set: 4 galaxy, 1 quasar and 11 stellar templates computed by
- * {@link Recipes}. The checksum is SHA-256 over each template's id, class, subclass, wavelengths
+ * {@link Recipes}. The checksum follows the rule of {@link TemplateSets#checksum(List)}.
  * and flux (IEEE doubles, big-endian), so it changes whenever a recipe does. Immutable and
  * thread-safe. Registered as a DS component (generated once, at activation).
  */
@@ -32,27 +28,7 @@ public final class StandardTemplateSet implements TemplateSet {
 
     public StandardTemplateSet() {
         this.templates = List.copyOf(Recipes.all());
-        this.checksum = checksum(templates);
-    }
-
-    static String checksum(List<Template> templates) {
-        try {
-            MessageDigest md = MessageDigest.getInstance("SHA-256");
-            for (Template t : templates) {
-                md.update((t.id() + "|" + t.objectClass().key() + "|" + t.subclass() + "|").getBytes(StandardCharsets.UTF_8));
-                ByteBuffer b = ByteBuffer.allocate(16 * t.size());
-                for (double w : t.restVacuumAngstrom()) {
-                    b.putDouble(w);
-                }
-                for (double f : t.flux()) {
-                    b.putDouble(f);
-                }
-                md.update(b.array());
-            }
-            return HexFormat.of().formatHex(md.digest());
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 missing from the Java runtime", e);
-        }
+        this.checksum = TemplateSets.checksum(templates);
     }
 
     @Override

@@ -1,5 +1,9 @@
 package org.redward.templates.standard.internal;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.junit.jupiter.api.Test;
+
 import java.util.Set;
 
 import org.redward.api.templates.TemplateSet;
@@ -12,12 +16,14 @@ class StandardTemplateSetContractTest extends TemplateSetContractTest {
     private static final TemplateSet SET = new StandardTemplateSet();
 
     @Override
-    protected TemplateSet templateSet() {
-        return SET;
+    protected TemplateSet createTemplateSet() {
+        return new StandardTemplateSet();
     }
 
-    @Override
-    protected Set<ObjectClass> requiredClasses() {
-        return Set.of(ObjectClass.GALAXY, ObjectClass.QUASAR, ObjectClass.STAR);
+    @Test
+    void coversGalaxiesQuasarsAndStars() {
+        Set<ObjectClass> classes = new java.util.HashSet<>();
+        SET.templates().forEach(t -> classes.add(t.objectClass()));
+        assertEquals(Set.of(ObjectClass.GALAXY, ObjectClass.QUASAR, ObjectClass.STAR), classes);
     }
 }

@@ -1,0 +1,84 @@
+package org.redward.templates.internal;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+
+import org.redward.testkit.SharedData;
+
+/**
+ * Packs the published empirical templates of the shared test data with {@code redward templates
+ * pack}, once per test run: Kinney et al. 1996 (ApJ 467, 38) quiescent galaxies and Calzetti,
+ * Kinney &amp; Storchi-Bergmann 1994 (ApJ 429, 582) starbursts, Pickles 1998 (PASP 110, 863) stars,
+ * all treated as air wavelengths as the data's README advises; Vanden Berk et al. 2001 (AJ 122,
+ * 549) quasar composite, vacuum.
+ */
+final class PublishedTemplates {
+
+    static final String ID = "published-empirical";
+
+    private static Path jar;
+    private static String stdout;
+
+    private PublishedTemplates() {
+    }
+
+    /** The packed bundle (made on first call). */
+    static synchronized Path jar() throws Exception {
+        if (jar == null) {
+            Path root = SharedData.templates();
+            List<String> args = new ArrayList<>(List.of("pack"));
+            List<String> classes = new ArrayList<>();
+            List<String> media = new ArrayList<>();
+            for (String folder : List.of("galaxies", "stars")) {
+                for (Path f : list(root.resolve(folder))) {
+                    args.add(f.toString());
+                    classes.add(folder.equals("galaxies") ? "galaxy" : "star");
+                    media.add("air");
+                }
+            }
+            args.add(root.resolve("quasars/VandenBerk2001.dat").toString());
+            classes.add("quasar");
+            media.add("vacuum");
+            Path dir = Files.createTempDirectory("redward-packed-");
+            dir.toFile().deleteOnExit();
+            Path out = dir.resolve(ID + ".jar");
+            args.addAll(List.of("--id", ID, "--version", "1.0.0",
+                    "--description", "Kinney et al. 1996; Calzetti et al. 1994; Pickles 1998; Vanden Berk et al. 2001",
+                    "--class", String.join(",", classes), "--medium", String.join(",", media), "--out", out.toString()));
+            TestContext ctx = new TestContext(dir);
+            int rc = new TemplatesCommand().run(ctx, args);
+            if (rc != 0) {
+                throw new AssertionError("templates pack failed (" + rc + "): " + ctx.stderr());
+            }
+            stdout = ctx.stdout();
+            jar = out;
+            out.toFile().deleteOnExit();
+        }
+        return jar;
+    }
+
+    private static org.redward.api.templates.TemplateSet set;
+
+    /** The packed set loaded back as the extender loads it (cached). */
+    static synchronized org.redward.api.templates.TemplateSet set() throws Exception {
+        if (set == null) {
+            set = TemplateSetLoader.loadJar(jar()).get(0).set();
+        }
+        return set;
+    }
+
+    static String packOutput() throws Exception {
+        jar();
+        return stdout;
+    }
+
+    private static List<Path> list(Path folder) throws IOException {
+        try (Stream<Path> s = Files.list(folder)) {
+            return s.filter(p -> p.toString().endsWith(".fits")).sorted().toList();
+        }
+    }
+}
