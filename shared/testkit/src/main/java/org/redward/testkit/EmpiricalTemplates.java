@@ -1,7 +1,6 @@
 package org.redward.testkit;
 
 import java.io.IOException;
-import java.lang.reflect.Array;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -56,8 +55,8 @@ public final class EmpiricalTemplates {
         try (Fits fits = new Fits(file.toFile())) {
             BasicHDU<?>[] hdus = fits.read();
             BinaryTableHDU t = (BinaryTableHDU) hdus[1];
-            double[] w = doubles(t.getColumn("WAVELENGTH"));
-            double[] f = doubles(t.getColumn("FLUX"));
+            double[] w = RealData.doubles(t.getColumn("WAVELENGTH"));
+            double[] f = RealData.doubles(t.getColumn("FLUX"));
             return make(c.key() + "-" + name, c, name, w, f, true);
         }
     }
@@ -98,14 +97,5 @@ public final class EmpiricalTemplates {
             ff[i] = keep.get(i)[1];
         }
         return Template.of(id.toLowerCase(Locale.ROOT), c, sub, ww, ff);
-    }
-
-    private static double[] doubles(Object a) {
-        int n = Array.getLength(a);
-        double[] d = new double[n];
-        for (int i = 0; i < n; i++) {
-            d[i] = ((Number) Array.get(a, i)).doubleValue();
-        }
-        return d;
     }
 }

@@ -139,7 +139,8 @@ public final class RealData {
         }
     }
 
-    private static double[] doubles(Object a) {
+    /** A numeric array of any primitive type as doubles. */
+    static double[] doubles(Object a) {
         int n = Array.getLength(a);
         double[] d = new double[n];
         for (int i = 0; i < n; i++) {

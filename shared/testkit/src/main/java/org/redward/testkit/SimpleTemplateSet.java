@@ -5,7 +5,7 @@ import java.util.List;
 import org.redward.api.templates.Template;
 import org.redward.api.templates.TemplateSet;
 
-/** A template set built in test code (its checksum is a 64-bit hash of the data, padded: for tests only). */
+/** A template set built in test code (checksum by the rule of TemplateSets). */
 public final class SimpleTemplateSet implements TemplateSet {
 
     private final String id;
@@ -15,13 +15,7 @@ public final class SimpleTemplateSet implements TemplateSet {
     public SimpleTemplateSet(String id, List<Template> templates) {
         this.id = id;
         this.templates = List.copyOf(templates);
-        long h = id.hashCode();
-        for (Template t : this.templates) {
-            h = h * 31 + t.id().hashCode();
-            h = h * 31 + java.util.Arrays.hashCode(t.flux());
-            h = h * 31 + java.util.Arrays.hashCode(t.restVacuumAngstrom());
-        }
-        this.checksum = String.format("%064x", h & Long.MAX_VALUE);
+        this.checksum = org.redward.api.templates.TemplateSets.checksum(this.templates);
     }
 
     @Override

@@ -1,8 +1,5 @@
 package org.redward.redshift.chisq.internal;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -21,12 +18,12 @@ import org.redward.api.redshift.ScoreCurve;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.TemplateSet;
 import org.redward.redshift.kit.Calibration;
+import org.redward.redshift.kit.EstimatorBase;
 import org.redward.redshift.kit.FftCorrelator;
 import org.redward.redshift.kit.GriddedSpectrum;
 import org.redward.redshift.kit.GriddedTemplate;
 import org.redward.redshift.kit.Params;
 import org.redward.redshift.kit.Peaks;
-import org.redward.redshift.kit.Provenance;
 import org.redward.redshift.kit.SearchRanges;
 import org.redward.redshift.kit.Shifts;
 import org.redward.redshift.kit.TemplateBank;
@@ -62,7 +59,7 @@ import org.redward.spectrum.Spectrum;
     Provided.ID + "=" + ChiSquareEstimator.ID,
     Provided.DESCRIPTION + "=chi-square template fitting over a redshift grid (Glazebrook et al. 1998; Bolton et al. 2012)",
     RedshiftEstimator.USES_TEMPLATES + ":Boolean=true"})
-public final class ChiSquareEstimator implements RedshiftEstimator {
+public final class ChiSquareEstimator extends EstimatorBase {
 
     public static final String ID = "chisq";
     static final double LOG10_STEP = 1e-4;
@@ -72,25 +69,21 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
     /** Default threshold of the broad-line statistic above which a galaxy fit becomes a quasar with host. */
     static final double BROAD_LINE_THRESHOLD = 300.0;
 
-    private volatile String bundle = "org.redward.redshift.chisq";
-    private volatile String version = "unpackaged";
     private final TemplateBank.Cache<Prepared> banks = new TemplateBank.Cache<>(4);
     private final TemplateBank.Cache<BasisGroup.Prepared> transforms = new TemplateBank.Cache<>(64);
-    private final Calibration calibration;
 
     public ChiSquareEstimator() {
-        FftCorrelator.singleThreaded();
-        try (InputStream in = ChiSquareEstimator.class.getResourceAsStream("calibration.tsv")) {
-            calibration = Calibration.read("delta_chi2", in, 0.2);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        super("org.redward.redshift.chisq", "delta_chi2");
     }
 
     @Activate
     void activate(BundleContext context) {
-        bundle = context.getBundle().getSymbolicName();
-        version = context.getBundle().getVersion().toString();
+        identify(context.getBundle().getSymbolicName(), context.getBundle().getVersion().toString());
+    }
+
+    @Override
+    protected String id() {
+        return ID;
     }
 
     /** A template set prepared for this estimator. */
@@ -114,20 +107,7 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
     }
 
     @Override
-    public RedshiftSolution estimate(Spectrum spectrum, EstimationContext context) {
-        try {
-            return run(spectrum, context);
-        } catch (IllegalArgumentException e) {
-            return RedshiftSolution.failed(e.getMessage());
-        } catch (RuntimeException e) {
-            return RedshiftSolution.failed("chisq estimator internal error: " + e);
-        }
-    }
-
-    private RedshiftSolution run(Spectrum spectrum, EstimationContext ctx) {
-        if (spectrum == null || ctx == null) {
-            return RedshiftSolution.failed("no spectrum or no estimation context given");
-        }
+    protected RedshiftSolution run(Spectrum spectrum, EstimationContext ctx) {
         TemplateSet set = ctx.templates().orElse(null);
         if (set == null) {
             return RedshiftSolution.failed("the chisq estimator needs a template set and none was given");
@@ -147,7 +127,7 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
         used.put("z_min", Double.toString(ctx.zMin()));
         used.put("z_max", Double.toString(ctx.zMax()));
         used.putAll(p);
-        Map<String, String> provenance = Provenance.of(bundle, version, ID, set, used);
+        Map<String, String> provenance = provenance(set, used);
 
         GriddedSpectrum gs = GriddedSpectrum.of(spectrum, LOG10_STEP, ctx.maskedRegionsVacuumAngstrom());
         if (gs == null || gs.usablePixels < 20) {
@@ -254,9 +234,6 @@ public final class ChiSquareEstimator implements RedshiftEstimator {
         return b.build();
     }
 
-    private static RedshiftSolution failed(String reason, Map<String, String> provenance) {
-        return RedshiftSolution.failed(reason).toBuilder().provenance(provenance).grade("void", 0.0).build();
-    }
 
     /** {z, sigma_z} from the parabola through the minimum and its neighbours. */
     private static double[] refine(Candidate c) {

@@ -1,8 +1,5 @@
 package org.redward.redshift.xcorr.internal;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -21,11 +18,11 @@ import org.redward.api.redshift.ScoreCurve;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.TemplateSet;
 import org.redward.redshift.kit.Calibration;
+import org.redward.redshift.kit.EstimatorBase;
 import org.redward.redshift.kit.FftCorrelator;
 import org.redward.redshift.kit.GriddedSpectrum;
 import org.redward.redshift.kit.GriddedTemplate;
 import org.redward.redshift.kit.Peaks;
-import org.redward.redshift.kit.Provenance;
 import org.redward.redshift.kit.SearchRanges;
 import org.redward.redshift.kit.Shifts;
 import org.redward.redshift.kit.TemplateBank;
@@ -45,32 +42,28 @@ import org.redward.spectrum.Spectrum;
     Provided.ID + "=" + CrossCorrelationEstimator.ID,
     Provided.DESCRIPTION + "=Fourier cross-correlation with each template (Tonry & Davis 1979)",
     RedshiftEstimator.USES_TEMPLATES + ":Boolean=true"})
-public final class CrossCorrelationEstimator implements RedshiftEstimator {
+public final class CrossCorrelationEstimator extends EstimatorBase {
 
     public static final String ID = "xcorr";
     static final double LOG10_STEP = 1e-4;
     static final double DISTINCT_KM_S = 1000.0;
     static final int PEAKS_PER_TEMPLATE = 5;
 
-    private volatile String bundle = "org.redward.redshift.xcorr";
-    private volatile String version = "unpackaged";
     private final TemplateBank.Cache<TemplateBank> banks = new TemplateBank.Cache<>(4);
     private final TemplateBank.Cache<CrossCorrelation.Filtered> transforms = new TemplateBank.Cache<>(128);
-    private final Calibration calibration;
 
     public CrossCorrelationEstimator() {
-        FftCorrelator.singleThreaded();
-        try (InputStream in = CrossCorrelationEstimator.class.getResourceAsStream("calibration.tsv")) {
-            calibration = Calibration.read("r", in, 0.2);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        super("org.redward.redshift.xcorr", "r");
     }
 
     @Activate
     void activate(BundleContext context) {
-        bundle = context.getBundle().getSymbolicName();
-        version = context.getBundle().getVersion().toString();
+        identify(context.getBundle().getSymbolicName(), context.getBundle().getVersion().toString());
+    }
+
+    @Override
+    protected String id() {
+        return ID;
     }
 
     /** One correlation peak of one template. */
@@ -93,20 +86,7 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
     }
 
     @Override
-    public RedshiftSolution estimate(Spectrum spectrum, EstimationContext context) {
-        try {
-            return run(spectrum, context);
-        } catch (IllegalArgumentException e) {
-            return RedshiftSolution.failed(e.getMessage());
-        } catch (RuntimeException e) {
-            return RedshiftSolution.failed("xcorr estimator internal error: " + e);
-        }
-    }
-
-    private RedshiftSolution run(Spectrum spectrum, EstimationContext ctx) {
-        if (spectrum == null || ctx == null) {
-            return RedshiftSolution.failed("no spectrum or no estimation context given");
-        }
+    protected RedshiftSolution run(Spectrum spectrum, EstimationContext ctx) {
         TemplateSet set = ctx.templates().orElse(null);
         if (set == null) {
             return RedshiftSolution.failed("the xcorr estimator needs a template set and none was given");
@@ -118,7 +98,7 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
         used.put("z_min", Double.toString(ctx.zMin()));
         used.put("z_max", Double.toString(ctx.zMax()));
         used.putAll(ctx.parameters());
-        Map<String, String> provenance = Provenance.of(bundle, version, ID, set, used);
+        Map<String, String> provenance = provenance(set, used);
 
         GriddedSpectrum gs = GriddedSpectrum.of(spectrum, LOG10_STEP, ctx.maskedRegionsVacuumAngstrom());
         if (gs == null || gs.usablePixels < 20) {
@@ -229,7 +209,4 @@ public final class CrossCorrelationEstimator implements RedshiftEstimator {
         return w;
     }
 
-    private static RedshiftSolution failed(String reason, Map<String, String> provenance) {
-        return RedshiftSolution.failed(reason).toBuilder().provenance(provenance).grade("void", 0.0).build();
-    }
 }

@@ -10,8 +10,8 @@ import org.redward.api.templates.TemplateSets;
 
 /**
  * The standard template set: 4 galaxy, 1 quasar and 11 stellar templates computed by
- * {@link Recipes}. The checksum follows the rule of {@link TemplateSets#checksum(List)}.
- * and flux (IEEE doubles, big-endian), so it changes whenever a recipe does. Immutable and
+ * {@link Recipes}. The checksum follows the rule of {@link TemplateSets#checksum(List)}, so it
+ * changes whenever a recipe does. Immutable and
  * thread-safe. Registered as a DS component (generated once, at activation).
  */
 @Component(service = TemplateSet.class, property = {

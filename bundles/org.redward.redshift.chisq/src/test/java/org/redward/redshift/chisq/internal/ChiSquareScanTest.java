@@ -1,0 +1,80 @@
+package org.redward.redshift.chisq.internal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+
+import org.apache.commons.math3.linear.CholeskyDecomposition;
+import org.apache.commons.math3.linear.MatrixUtils;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.junit.jupiter.api.Test;
+import org.redward.api.templates.Template;
+import org.redward.redshift.kit.FftCorrelator;
+import org.redward.redshift.kit.GriddedSpectrum;
+import org.redward.redshift.kit.GriddedTemplate;
+import org.redward.spectrum.ObjectClass;
+import org.redward.templates.standard.internal.StandardTemplateSet;
+import org.redward.testkit.SyntheticSpectra;
+
+/**
+ * The FFT scan against the direct solution, and the small Cholesky solver against Commons Math
+ * (a general-purpose reference library).
+ */
+class ChiSquareScanTest {
+
+    @Test
+    void fftScanEqualsDirectLeastSquares() {
+        List<GriddedTemplate> galaxies = new ArrayList<>();
+        for (Template t : new StandardTemplateSet().templates()) {
+            if (t.objectClass() == ObjectClass.GALAXY) {
+                galaxies.add(GriddedTemplate.of(t, 1e-4));
+            }
+        }
+        BasisGroup g = new BasisGroup(ObjectClass.GALAXY, "galaxy", galaxies, galaxies.size());
+        GriddedSpectrum s = GriddedSpectrum.of(SyntheticSpectra.absorptionGalaxy(0.3, 5, 3), 1e-4, null);
+        long lo = 0, hi = 4000;
+        long offset = s.startIndex - g.startIndex;
+        int n = FftCorrelator.lengthFor(s.size(), g.length, (int) (lo - offset), (int) (hi - offset));
+        ChiSquareScan.Curve c = ChiSquareScan.scan(s, new ChiSquareScan.SpectrumSide(s, 3, n), g, g.prepare(n), lo, hi, 0.5);
+        for (long k = lo; k <= hi; k += 397) {
+            double direct = ChiSquareScan.solveDirect(s, g, 3, k)[g.size() + 3];
+            assertEquals(direct, c.chi2()[(int) (k - lo)], 1e-9 * Math.abs(direct), "chi2 at shift " + k);
+        }
+    }
+
+    @Test
+    void smallCholeskyAgreesWithCommonsMath() {
+        Random r = new Random(5);
+        int d = 7;
+        double[][] a = new double[d][d];
+        for (int i = 0; i < d; i++) {
+            for (int j = 0; j < d; j++) {
+                a[i][j] = r.nextGaussian();
+            }
+        }
+        RealMatrix m = MatrixUtils.createRealMatrix(a);
+        RealMatrix spd = m.multiply(m.transpose()).add(MatrixUtils.createRealIdentityMatrix(d));
+        double[] b = new double[d];
+        for (int i = 0; i < d; i++) {
+            b[i] = r.nextGaussian();
+        }
+        double[] flat = new double[d * d];
+        for (int i = 0; i < d; i++) {
+            for (int j = 0; j < d; j++) {
+                flat[i * d + j] = spd.getEntry(i, j);
+            }
+        }
+        double[] mine = SmallCholesky.solve(flat.clone(), b, d);
+        double[] ref = new CholeskyDecomposition(spd).getSolver().solve(MatrixUtils.createRealVector(b)).toArray();
+        for (int i = 0; i < d; i++) {
+            assertEquals(ref[i], mine[i], 1e-10 * Math.max(1, Math.abs(ref[i])));
+        }
+        double q = 0;
+        for (int i = 0; i < d; i++) {
+            q += b[i] * ref[i];
+        }
+        assertEquals(q, SmallCholesky.quadraticForm(flat.clone(), b, d), 1e-10 * Math.abs(q));
+    }
+}
