@@ -24,6 +24,15 @@ public interface SpectrumReader {
     int sniff(Path file, byte[] head);
 
     /**
+     * How well an instrument profile fits the file, 0 (not at all) to 100 (certain), judged from
+     * the file's headers (e.g. the profile's {@code match.*} settings against the primary header).
+     * Called only for profiles meant for this reader. Must be cheap and must not throw.
+     */
+    default int matches(Path file, byte[] head, InstrumentProfile profile) {
+        return 0;
+    }
+
+    /**
      * Opens the file for streaming.
      *
      * @param profile an instrument profile to apply (forced by the user or found by sniffing), if any

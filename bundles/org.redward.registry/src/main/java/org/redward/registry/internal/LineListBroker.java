@@ -1,0 +1,30 @@
+package org.redward.registry.internal;
+
+import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+import org.redward.api.lines.LineList;
+import org.redward.api.lines.LineListRegistry;
+import org.redward.api.registry.Provided;
+
+/** Tracks every {@link LineList} service. */
+@Component(service = {LineListRegistry.class, org.redward.api.registry.ProviderRegistry.class},
+        property = Provided.FAMILY + "=" + LineListRegistry.FAMILY)
+public final class LineListBroker extends Tracked<LineList> implements LineListRegistry {
+
+    @Override
+    public String family() {
+        return FAMILY;
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(LineList service, ServiceReference<LineList> ref) {
+        add(service, ref);
+    }
+
+    void unbind(LineList service, ServiceReference<LineList> ref) {
+        remove(service, ref);
+    }
+}
