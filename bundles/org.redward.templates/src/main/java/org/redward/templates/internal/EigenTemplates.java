@@ -223,30 +223,26 @@ public final class EigenTemplates {
      * Components below 1e-10 of the first singular value (rank deficiency) are dropped.
      */
     private static Svd top(double[][] x, int k) {
+        if (x.length > x[0].length) {
+            Svd t = top(transpose(x), k);
+            return new Svd(transpose(t.v()), t.s(), transpose(t.u()), t.total());
+        }
         int n = x.length;
         int m = x[0].length;
-        boolean rows = n <= m;
-        int g = rows ? n : m;
-        double[][] gram = new double[g][g];
+        double[][] gram = new double[n][n];
         double total = 0;
         for (double[] row : x) {
             for (double v : row) {
                 total += v * v;
             }
         }
-        for (int a = 0; a < g; a++) {
-            for (int b = a; b < g; b++) {
+        for (int a = 0; a < n; a++) {
+            for (int b = a; b < n; b++) {
                 double d = 0;
-                if (rows) {
-                    double[] xa = x[a];
-                    double[] xb = x[b];
-                    for (int i = 0; i < m; i++) {
-                        d += xa[i] * xb[i];
-                    }
-                } else {
-                    for (int r = 0; r < n; r++) {
-                        d += x[r][a] * x[r][b];
-                    }
+                double[] xa = x[a];
+                double[] xb = x[b];
+                for (int i = 0; i < m; i++) {
+                    d += xa[i] * xb[i];
                 }
                 gram[a][b] = d;
                 gram[b][a] = d;
@@ -255,7 +251,7 @@ public final class EigenTemplates {
         SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(gram, false));
         double[] lambda = svd.getSingularValues();
         RealMatrix vecs = svd.getU();
-        int kk = Math.min(k, g);
+        int kk = Math.min(k, n);
         double first = Math.sqrt(Math.max(lambda[0], 0));
         while (kk > 0 && !(Math.sqrt(Math.max(lambda[kk - 1], 0)) > 1e-10 * first)) {
             kk--;
@@ -265,31 +261,28 @@ public final class EigenTemplates {
         double[][] v = new double[kk][m];
         for (int c = 0; c < kk; c++) {
             s[c] = Math.sqrt(lambda[c]);
-            if (rows) {
+            for (int r = 0; r < n; r++) {
+                u[r][c] = vecs.getEntry(r, c);
+            }
+            for (int i = 0; i < m; i++) {
+                double d = 0;
                 for (int r = 0; r < n; r++) {
-                    u[r][c] = vecs.getEntry(r, c);
+                    d += x[r][i] * u[r][c];
                 }
-                for (int i = 0; i < m; i++) {
-                    double d = 0;
-                    for (int r = 0; r < n; r++) {
-                        d += x[r][i] * u[r][c];
-                    }
-                    v[c][i] = d / s[c];
-                }
-            } else {
-                for (int i = 0; i < m; i++) {
-                    v[c][i] = vecs.getEntry(i, c);
-                }
-                for (int r = 0; r < n; r++) {
-                    double d = 0;
-                    for (int i = 0; i < m; i++) {
-                        d += x[r][i] * v[c][i];
-                    }
-                    u[r][c] = d / s[c];
-                }
+                v[c][i] = d / s[c];
             }
         }
         return new Svd(u, s, v, total);
+    }
+
+    private static double[][] transpose(double[][] a) {
+        double[][] t = new double[a.length == 0 ? 0 : a[0].length][a.length];
+        for (int i = 0; i < a.length; i++) {
+            for (int j = 0; j < a[i].length; j++) {
+                t[j][i] = a[i][j];
+            }
+        }
+        return t;
     }
 
     private static int coverage(boolean[][] have, int i) {

@@ -20,7 +20,7 @@ import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.UsageException;
-import org.redward.api.formats.ReaderRegistry;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.Template;
 import org.redward.api.templates.TemplateRegistry;
@@ -43,7 +43,7 @@ public final class TemplatesCommand implements Command {
     private volatile TemplateRegistry templates;
 
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
-    private volatile ReaderRegistry readers;
+    private volatile SpectrumInputs inputs;
 
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
     private volatile TemplateExtender extender;
@@ -111,7 +111,7 @@ public final class TemplatesCommand implements Command {
             case "pack":
                 return pack(ctx, rest);
             case "build":
-                return TemplateBuildCommand.run(ctx, rest, readers);
+                return TemplateBuildCommand.run(ctx, rest, inputs);
             case "list":
                 return list(ctx, rest);
             default:
