@@ -78,6 +78,30 @@ class TemplateSetStoryIT {
     }
 
     @Test
+    void eigenTemplatesBuiltFromRealSpectraAreListed() throws Exception {
+        // templates build over the whole realdata folder, with the SDSS galaxies' published redshifts (truth.tsv)
+        // as the known redshifts the command takes as input; the other files are read and left out
+        Path real = SharedData.realData();
+        List<String> rows = new ArrayList<>(List.of("file z class"));
+        List<String> lines = Files.readAllLines(real.resolve("truth.tsv"));
+        for (String l : lines.subList(1, lines.size())) {
+            String[] p = l.split("\t");
+            if (p[1].startsWith("SDSS") && p[3].equals("GALAXY")) {
+                rows.add(p[0] + " " + p[5] + " galaxy");
+            }
+        }
+        Path table = temp.resolve("known.txt");
+        Files.write(table, rows);
+        Path drop = Files.createDirectories(temp.resolve("built"));
+        Product.Run r = Product.run("templates", "build", real.toString(), "--redshifts", table.toString(),
+                "--id", "sdss-eigen", "--components", "3", "--out", drop.resolve("sdss-eigen.jar").toString());
+        assertEquals(0, r.status(), r.toString());
+        assertTrue(r.out().contains("class galaxy: 8 spectra, 3 components"), r.toString());
+        Product.Run list = Product.run("templates", "list", "--json", "--bundles", drop.toString());
+        assertTrue(list.out().contains("\"id\":\"sdss-eigen\"") && list.out().contains("\"galaxy\":3"), list.toString());
+    }
+
+    @Test
     void measuringRealSpectraWithThePackedSet() throws Exception {
         Product.Run help = Product.run("measure", "--help");
         Assumptions.assumeTrue(help.status() == 0, "no 'measure' command in the product yet: the comparison is skipped");
