@@ -42,21 +42,11 @@ class TemplateSetStoryIT {
     private Path pack() throws Exception {
         Path root = SharedData.templates();
         Path drop = Files.createDirectories(temp.resolve("drop"));
-        List<String> args = new ArrayList<>(List.of("templates", "pack"));
-        List<String> classes = new ArrayList<>();
-        List<String> media = new ArrayList<>();
-        for (String folder : List.of("galaxies", "stars")) {
-            try (Stream<Path> s = Files.list(root.resolve(folder))) {
-                for (Path f : s.filter(p -> p.toString().endsWith(".fits")).sorted().toList()) {
-                    args.add(f.toString());
-                    classes.add(folder.equals("galaxies") ? "galaxy" : "star");
-                    media.add("air"); // the data's README: treat the 5 A grids as air
-                }
-            }
-        }
-        args.add(root.resolve("quasars/VandenBerk2001.dat").toString());
-        classes.add("quasar");
-        media.add("vacuum");
+        // a folder stands for its template files, which share its options; the data's README: treat the 5 A grids as air
+        List<String> args = new ArrayList<>(List.of("templates", "pack", root.resolve("galaxies").toString(),
+                root.resolve("stars").toString(), root.resolve("quasars/VandenBerk2001.dat").toString()));
+        List<String> classes = List.of("galaxy", "star", "quasar");
+        List<String> media = List.of("air", "air", "vacuum");
         args.addAll(List.of("--id", ID, "--class", String.join(",", classes), "--medium", String.join(",", media),
                 "--description", "Kinney et al. 1996; Calzetti et al. 1994; Pickles 1998; Vanden Berk et al. 2001",
                 "--out", drop.resolve(ID + ".jar").toString()));
