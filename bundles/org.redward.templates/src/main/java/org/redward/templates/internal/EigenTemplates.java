@@ -31,7 +31,8 @@ import org.redward.spectrum.Spectrum;
  * Everson &amp; Sirovich 1995, JOSA A 12, 1657, and Connolly &amp; Szalay 1999, AJ 117, 2052; the
  * references are from memory); (5) the singular value decomposition (Commons Math) of the
  * spectra-by-pixels matrix, without subtracting the mean, gives the components: the first
- * follows the mean spectrum, the next ones its main variations. Each component's sign is chosen
+ * follows the mean spectrum, the next ones its main variations (computed through the smaller Gram
+ * matrix, see {@code top}). Each component's sign is chosen
  * so that its sum is positive. Pixel errors are not used as weights (a known simplification).
  *
  * <p>Units: vacuum Angstrom; components are unit vectors (dimensionless). Masked pixels are
@@ -47,7 +48,10 @@ public final class EigenTemplates {
     public record Result(List<Template> templates, double[] varianceFraction, int spectraUsed, String note) {
     }
 
+    /** At most this many refills of the gaps (gappy PCA). */
     private static final int ITERATIONS = 10;
+    /** The refills stop when no filled value moves by more than this fraction of the largest. */
+    private static final double CONVERGED = 1e-4;
 
     private EigenTemplates() {
     }
@@ -160,35 +164,34 @@ public final class EigenTemplates {
                 gappy |= !b;
             }
         }
-        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(data, false));
+        Svd svd = top(data, k);
         for (int it = 0; gappy && it < ITERATIONS; it++) {
-            RealMatrix u = svd.getU();
-            RealMatrix vt = svd.getVT();
-            double[] sv = svd.getSingularValues();
+            double change = 0;
+            double scale = 0;
             for (int s = 0; s < n; s++) {
                 for (int i = 0; i < bestLen; i++) {
                     if (!known[s][i]) {
                         double v = 0;
-                        for (int c = 0; c < k; c++) {
-                            v += u.getEntry(s, c) * sv[c] * vt.getEntry(c, i);
+                        for (int c = 0; c < svd.s().length; c++) {
+                            v += svd.u()[s][c] * svd.s()[c] * svd.v()[c][i];
                         }
+                        change = Math.max(change, Math.abs(v - data[s][i]));
+                        scale = Math.max(scale, Math.abs(v));
                         data[s][i] = v;
                     }
                 }
             }
-            svd = new SingularValueDecomposition(new Array2DRowRealMatrix(data, false));
+            svd = top(data, k);
+            if (change <= CONVERGED * scale) {
+                break;
+            }
         }
-        double[] sv = svd.getSingularValues();
-        double total = 0;
-        for (double v : sv) {
-            total += v * v;
-        }
-        RealMatrix vt = svd.getVT();
         double[] wave = Arrays.copyOfRange(grid.vacuumAngstrom(), bestStart, bestStart + bestLen);
         List<Template> out = new ArrayList<>();
-        double[] frac = new double[k];
-        for (int c = 0; c < k; c++) {
-            double[] comp = vt.getRow(c);
+        int kept = svd.s().length;
+        double[] frac = new double[kept];
+        for (int c = 0; c < kept; c++) {
+            double[] comp = svd.v()[c].clone();
             double sum = 0;
             for (double v : comp) {
                 sum += v;
@@ -198,13 +201,88 @@ public final class EigenTemplates {
                     comp[i] = -comp[i];
                 }
             }
-            frac[c] = sv[c] * sv[c] / total;
+            frac[c] = svd.s()[c] * svd.s()[c] / svd.total();
             String id = cls.key() + "-eigen-" + (c + 1);
             out.add(Template.of(id, cls, "eigen-" + (c + 1), wave, comp));
         }
         String note = String.format(Locale.ROOT, "class %s: %d spectra, %d components over %.1f-%.1f A rest (%d px)%s",
-                cls.key(), n, k, wave[0], wave[wave.length - 1], bestLen, gappy ? ", gaps filled by gappy PCA" : "");
+                cls.key(), n, kept, wave[0], wave[wave.length - 1], bestLen, gappy ? ", gaps filled by gappy PCA" : "");
         return new Result(out, frac, n, note);
+    }
+
+    /** The leading singular triplets of a matrix: u (rows x k), s (k), v (k x columns), and the sum of squares. */
+    private record Svd(double[][] u, double[] s, double[][] v, double total) {
+    }
+
+    /**
+     * The first {@code k} singular values and vectors of {@code x} (n x m), through the Commons
+     * Math SVD of the smaller Gram matrix (X X^T when n &lt;= m, else X^T X): its singular values
+     * are the squares of those of X, and the other side's vectors follow as X^T u / s (or X v / s).
+     * Cost O(min(n,m)^2 max(n,m)) instead of a full SVD of X; precision is lost only in
+     * components far below the first (the condition number is squared), which are not kept.
+     * Components below 1e-10 of the first singular value (rank deficiency) are dropped.
+     */
+    private static Svd top(double[][] x, int k) {
+        if (x.length > x[0].length) {
+            Svd t = top(transpose(x), k);
+            return new Svd(transpose(t.v()), t.s(), transpose(t.u()), t.total());
+        }
+        int n = x.length;
+        int m = x[0].length;
+        double[][] gram = new double[n][n];
+        double total = 0;
+        for (double[] row : x) {
+            for (double v : row) {
+                total += v * v;
+            }
+        }
+        for (int a = 0; a < n; a++) {
+            for (int b = a; b < n; b++) {
+                double d = 0;
+                double[] xa = x[a];
+                double[] xb = x[b];
+                for (int i = 0; i < m; i++) {
+                    d += xa[i] * xb[i];
+                }
+                gram[a][b] = d;
+                gram[b][a] = d;
+            }
+        }
+        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(gram, false));
+        double[] lambda = svd.getSingularValues();
+        RealMatrix vecs = svd.getU();
+        int kk = Math.min(k, n);
+        double first = Math.sqrt(Math.max(lambda[0], 0));
+        while (kk > 0 && !(Math.sqrt(Math.max(lambda[kk - 1], 0)) > 1e-10 * first)) {
+            kk--;
+        }
+        double[] s = new double[kk];
+        double[][] u = new double[n][kk];
+        double[][] v = new double[kk][m];
+        for (int c = 0; c < kk; c++) {
+            s[c] = Math.sqrt(lambda[c]);
+            for (int r = 0; r < n; r++) {
+                u[r][c] = vecs.getEntry(r, c);
+            }
+            for (int i = 0; i < m; i++) {
+                double d = 0;
+                for (int r = 0; r < n; r++) {
+                    d += x[r][i] * u[r][c];
+                }
+                v[c][i] = d / s[c];
+            }
+        }
+        return new Svd(u, s, v, total);
+    }
+
+    private static double[][] transpose(double[][] a) {
+        double[][] t = new double[a.length == 0 ? 0 : a[0].length][a.length];
+        for (int i = 0; i < a.length; i++) {
+            for (int j = 0; j < a[i].length; j++) {
+                t[j][i] = a[i][j];
+            }
+        }
+        return t;
     }
 
     private static int coverage(boolean[][] have, int i) {

@@ -1,7 +1,6 @@
 package org.redward.templates.internal;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -12,16 +11,13 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Optional;
 
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Progress;
 import org.redward.api.commands.UsageException;
-import org.redward.api.formats.ReaderRegistry;
-import org.redward.api.formats.SpectrumReader;
+import org.redward.api.formats.ReadOptions;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.formats.SpectrumRecord;
-import org.redward.api.formats.SpectrumSource;
-import org.redward.api.registry.Provided;
 import org.redward.api.templates.Template;
 import org.redward.spectrum.ObjectClass;
 
@@ -37,7 +33,7 @@ final class TemplateBuildCommand {
                 "The redshift table is text (blank, comma or tab separated, '#' comments) with a header line naming the columns",
                 "file (the spectrum file's name), z, class (galaxy, quasar, star) and optionally index (0-based spectrum within the file)."})
     static final class Args {
-        @Parameters(arity = "1..*", paramLabel = "SPECTRA", description = "spectrum files (any layout a reader understands)")
+        @Parameters(arity = "1..*", paramLabel = "SPECTRA", description = "spectrum files, folders or list files (any layout a reader understands)")
         List<Path> spectra;
         @Option(names = "--redshifts", required = true, paramLabel = "TABLE", description = "known redshift and class of each spectrum")
         Path redshifts;
@@ -64,7 +60,7 @@ final class TemplateBuildCommand {
     private TemplateBuildCommand() {
     }
 
-    static int run(CommandContext ctx, List<String> arguments, ReaderRegistry readers) throws IOException {
+    static int run(CommandContext ctx, List<String> arguments, SpectrumInputs inputs) throws IOException {
         Args a = new Args();
         CommandLine cl = new CommandLine(a);
         try {
@@ -79,48 +75,39 @@ final class TemplateBuildCommand {
         if (a.components < 1 || !(a.step > 0) || !(a.coverage > 0 && a.coverage <= 1)) {
             throw new UsageException("build: --components must be >= 1, --step > 0, --coverage in (0, 1]");
         }
-        if (readers == null || readers.providers().isEmpty()) {
-            ctx.err().println("redward templates build: no spectrum readers are installed, so the spectra cannot be read");
+        if (inputs == null) {
+            ctx.err().println("redward templates build: the spectrum reading service is not installed, so the spectra cannot be read");
             return 1;
         }
         Path table = ctx.workingDirectory().resolve(a.redshifts);
         Map<String, Known> known = readTable(table);
         Map<ObjectClass, List<EigenTemplates.Input>> byClass = new EnumMap<>(ObjectClass.class);
         int skipped = 0;
-        Progress progress = ctx.progress("reading spectra", a.spectra.size());
+        List<Path> paths = new ArrayList<>();
         for (Path p : a.spectra) {
-            Path f = ctx.workingDirectory().resolve(p);
-            if (!Files.isRegularFile(f)) {
-                throw new UsageException("build: no such file: " + f);
-            }
-            SpectrumReader reader = choose(readers, f);
-            if (reader == null) {
-                ctx.err().println("redward templates build: " + f + ": no reader understands this file; skipped");
-                skipped++;
-                continue;
-            }
-            try (SpectrumSource src = reader.open(f, Optional.empty())) {
-                while (src.hasNext()) {
-                    SpectrumRecord r = src.next();
-                    Known k = known.get(key(f.getFileName().toString(), r.index()));
-                    if (k == null) {
-                        continue;
-                    }
-                    if (!r.ok()) {
-                        ctx.err().println("redward templates build: " + f + " " + r.location() + ": " + r.error() + "; skipped");
-                        skipped++;
-                        continue;
-                    }
-                    byClass.computeIfAbsent(k.cls(), c -> new ArrayList<>())
-                            .add(new EigenTemplates.Input(f.getFileName() + "#" + r.index(), r.spectrum().get(), k.z()));
-                }
-            } catch (Exception e) {
-                ctx.err().println("redward templates build: " + f + ": " + e.getMessage() + "; skipped");
-                skipped++;
-            }
-            progress.advance(1);
+            paths.add(ctx.workingDirectory().resolve(p));
         }
-        progress.close();
+        try (SpectrumInputs.Stream stream = inputs.open(paths, ReadOptions.defaults());
+                Progress progress = ctx.progress("reading spectra", stream.files())) {
+            int done = 0;
+            while (stream.hasNext()) {
+                SpectrumRecord r = stream.next();
+                if (stream.filesDone() > done) {
+                    progress.advance(stream.filesDone() - done);
+                    done = stream.filesDone();
+                }
+                if (!r.ok()) {
+                    ctx.err().println("redward templates build: " + r.error() + "; skipped");
+                    skipped++;
+                    continue;
+                }
+                Known k = known.get(key(r.file().getFileName().toString(), r.index()));
+                if (k != null) {
+                    byClass.computeIfAbsent(k.cls(), c -> new ArrayList<>())
+                            .add(new EigenTemplates.Input(r.file().getFileName() + "#" + r.index(), r.spectrum().get(), k.z()));
+                }
+            }
+        }
         if (byClass.isEmpty()) {
             ctx.err().println("redward templates build: none of the spectra is listed in " + table + " (match by file name and index)");
             return 1;
@@ -183,23 +170,6 @@ final class TemplateBuildCommand {
             sb.append(w[i]).append(' ').append(f[i]).append('\n');
         }
         return sb.toString().getBytes(StandardCharsets.UTF_8);
-    }
-
-    private static SpectrumReader choose(ReaderRegistry readers, Path f) throws IOException {
-        byte[] head;
-        try (InputStream in = Files.newInputStream(f)) {
-            head = in.readNBytes(8640);
-        }
-        SpectrumReader best = null;
-        int bestScore = 0;
-        for (Provided<SpectrumReader> p : readers.providers()) {
-            int s = p.service().sniff(f, head);
-            if (s > bestScore) {
-                bestScore = s;
-                best = p.service();
-            }
-        }
-        return best;
     }
 
     static String key(String file, int index) {

@@ -20,7 +20,7 @@ import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.UsageException;
-import org.redward.api.formats.ReaderRegistry;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.Template;
 import org.redward.api.templates.TemplateRegistry;
@@ -43,7 +43,7 @@ public final class TemplatesCommand implements Command {
     private volatile TemplateRegistry templates;
 
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
-    private volatile ReaderRegistry readers;
+    private volatile SpectrumInputs inputs;
 
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
     private volatile TemplateExtender extender;
@@ -61,9 +61,10 @@ public final class TemplatesCommand implements Command {
 
     @CommandLine.Command(name = "pack", mixinStandardHelpOptions = true,
             description = {"Write a data-only template-set bundle from template files (FITS table, FITS 1D image or text columns).",
-                "Options given once apply to every file; given once per file (or as a comma-separated list), they apply in file order."})
+                "Options given once apply to every file; given once per argument (or as a comma-separated list), they apply in order;",
+                "a folder argument stands for its template files (.fits, .fit, .fts, .txt, .dat, .csv, .tsv, .asc), which share its options."})
     static final class Pack {
-        @Parameters(arity = "0..*", paramLabel = "FILES", description = "template files: rest-frame spectra")
+        @Parameters(arity = "0..*", paramLabel = "FILES", description = "template files (rest-frame spectra) or folders of them")
         List<Path> files;
         @Option(names = "--descriptor", paramLabel = "FILE", description = {"a hand-written descriptor (properties: id, version, templates, and per template file, class, medium...; see the contributor guide)",
             "instead of FILES and the per-file options; its files are read relative to it"})
@@ -111,7 +112,7 @@ public final class TemplatesCommand implements Command {
             case "pack":
                 return pack(ctx, rest);
             case "build":
-                return TemplateBuildCommand.run(ctx, rest, readers);
+                return TemplateBuildCommand.run(ctx, rest, inputs);
             case "list":
                 return list(ctx, rest);
             default:
@@ -133,7 +134,29 @@ public final class TemplatesCommand implements Command {
         return args;
     }
 
-    /** The i-th value of an option given once for all files or once per file; null if absent. */
+    private static final java.util.regex.Pattern TEMPLATE_FILE =
+            java.util.regex.Pattern.compile("(?i).*\\.(fits|fit|fts|txt|dat|csv|tsv|asc)(\\.gz)?");
+
+    /** A file as itself; a folder as its template files (by extension, sorted, hidden ones skipped). */
+    static List<Path> expand(Path p) throws IOException {
+        if (Files.isRegularFile(p)) {
+            return List.of(p);
+        }
+        if (!Files.isDirectory(p)) {
+            throw new UsageException("pack: no such file or folder: " + p);
+        }
+        List<Path> out;
+        try (java.util.stream.Stream<Path> s = Files.list(p)) {
+            out = s.filter(Files::isRegularFile).filter(f -> !f.getFileName().toString().startsWith("."))
+                    .filter(f -> TEMPLATE_FILE.matcher(f.getFileName().toString()).matches()).sorted().toList();
+        }
+        if (out.isEmpty()) {
+            throw new UsageException("pack: folder " + p + " holds no template files (.fits, .fit, .fts, .txt, .dat, .csv, .tsv, .asc)");
+        }
+        return out;
+    }
+
+    /** The i-th value of an option given once for all arguments or once per argument; null if absent. */
     static String perFile(List<String> values, int i, int files, String option) {
         if (values == null || values.isEmpty()) {
             return null;
@@ -143,7 +166,7 @@ public final class TemplatesCommand implements Command {
         }
         if (values.size() != files) {
             throw new UsageException("pack: " + option + " given " + values.size() + " times for " + files
-                    + " files (give it once for all, or once per file)");
+                    + " files or folders (give it once for all, or once per file or folder)");
         }
         return values.get(i).trim();
     }
@@ -160,7 +183,14 @@ public final class TemplatesCommand implements Command {
             throw new UsageException("pack: give FILES with --id, --class and --medium, or a --descriptor");
         }
         int n = a.files.size();
-        String description = a.description != null ? a.description : "template set " + a.id + " packed from " + n + " files";
+        List<List<Path>> groups = new ArrayList<>();
+        int total = 0;
+        for (Path p : a.files) {
+            List<Path> g = expand(ctx.workingDirectory().resolve(p));
+            groups.add(g);
+            total += g.size();
+        }
+        String description = a.description != null ? a.description : "template set " + a.id + " packed from " + total + " files";
         TemplateBundleWriter w;
         try {
             w = new TemplateBundleWriter(a.id, a.version, description);
@@ -171,10 +201,6 @@ public final class TemplatesCommand implements Command {
             throw new UsageException("pack: --bad-pixels must be reject or interpolate, not '" + a.badPixels + "'");
         }
         for (int i = 0; i < n; i++) {
-            Path f = ctx.workingDirectory().resolve(a.files.get(i));
-            if (!Files.isRegularFile(f)) {
-                throw new UsageException("pack: no such file: " + f);
-            }
             String cls = perFile(a.classes, i, n, "--class");
             if (ObjectClass.parse(cls) == ObjectClass.UNKNOWN) {
                 throw new UsageException("pack: --class '" + cls + "' must be galaxy, quasar or star");
@@ -183,19 +209,21 @@ public final class TemplatesCommand implements Command {
             if (!medium.equals("air") && !medium.equals("vacuum")) {
                 throw new UsageException("pack: --medium '" + medium + "' must be air or vacuum");
             }
-            Map<String, String> keys = new LinkedHashMap<>();
-            keys.put(Descriptor.CLASS, ObjectClass.parse(cls).key());
-            String name = w.nameFor(f.getFileName().toString());
-            String sub = perFile(a.subclasses, i, n, "--subclass");
-            keys.put(Descriptor.SUBCLASS, sub != null ? sub : name);
-            keys.put(Descriptor.MEDIUM, medium);
-            putIfPresent(keys, Descriptor.UNIT, perFile(a.units, i, n, "--unit"));
-            putIfPresent(keys, Descriptor.TRUST, perFile(a.trust, i, n, "--trust"));
-            putIfPresent(keys, Descriptor.BAD_PIXELS, a.badPixels);
-            if (a.zeroIsBad) {
-                keys.put(Descriptor.ZERO_IS_BAD, "true");
+            for (Path f : groups.get(i)) {
+                Map<String, String> keys = new LinkedHashMap<>();
+                keys.put(Descriptor.CLASS, ObjectClass.parse(cls).key());
+                String name = w.nameFor(f.getFileName().toString());
+                String sub = perFile(a.subclasses, i, n, "--subclass");
+                keys.put(Descriptor.SUBCLASS, sub != null && groups.get(i).size() == 1 ? sub : name);
+                keys.put(Descriptor.MEDIUM, medium);
+                putIfPresent(keys, Descriptor.UNIT, perFile(a.units, i, n, "--unit"));
+                putIfPresent(keys, Descriptor.TRUST, perFile(a.trust, i, n, "--trust"));
+                putIfPresent(keys, Descriptor.BAD_PIXELS, a.badPixels);
+                if (a.zeroIsBad) {
+                    keys.put(Descriptor.ZERO_IS_BAD, "true");
+                }
+                w.add(name, f.getFileName().toString(), Files.readAllBytes(f), keys);
             }
-            w.add(name, f.getFileName().toString(), Files.readAllBytes(f), keys);
         }
         Path out = ctx.workingDirectory().resolve(a.out);
         TemplateSetLoader.Loaded loaded = write(ctx, "pack", w, out);

@@ -50,7 +50,7 @@ class BuiltEigenTemplatesContractTest extends TemplateSetContractTest {
             Path out = dir.resolve("built.jar");
             args.addAll(List.of("--redshifts", table.toString(), "--id", "built-sdss-galaxies", "--components", "3", "--out", out.toString()));
             TestContext ctx = new TestContext(dir);
-            int rc = TemplateBuildCommand.run(ctx, args, new CoaddTestReaders());
+            int rc = TemplateBuildCommand.run(ctx, args, new CoaddTestInputs());
             assertEquals(0, rc, ctx.stderr());
             output = ctx.stdout();
             jar = out;

@@ -53,6 +53,22 @@ class PackCommandTest {
     }
 
     @Test
+    void aFolderStandsForItsTemplateFiles() throws Exception {
+        textTemplate("gal/b.txt", 4000);
+        textTemplate("gal/a.dat", 4000);
+        Files.writeString(dir.resolve("gal/readme.md"), "not a template");
+        textTemplate("q.txt", 1200);
+        TestContext ctx = new TestContext(dir);
+        assertEquals(0, run(ctx, "pack", "gal", "q.txt", "--id", "f", "--class", "galaxy,quasar", "--medium", "vacuum",
+                "--out", "f.jar"), ctx.stderr());
+        TemplateSet s = TemplateSetLoader.loadJar(dir.resolve("f.jar")).get(0).set();
+        assertEquals(List.of("a", "b", "q"), s.templates().stream().map(t -> t.id()).toList());
+        assertEquals(ObjectClass.QUASAR, s.templates().get(2).objectClass());
+        assertThrows(UsageException.class, () -> run(new TestContext(dir), "pack", "nowhere", "--id", "f", "--class", "galaxy",
+                "--medium", "vacuum", "--out", "g.jar"));
+    }
+
+    @Test
     void aHandWrittenDescriptorIsPackedWithItsFiles() throws Exception {
         textTemplate("set/galaxies/g.txt", 3000);
         textTemplate("set/stars/s.txt", 5000);
