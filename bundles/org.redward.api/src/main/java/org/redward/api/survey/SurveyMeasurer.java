@@ -27,4 +27,13 @@ public interface SurveyMeasurer {
      * @throws IOException if the journal or the catalogue cannot be written
      */
     MeasureSummary measure(MeasureRequest request, MeasureListener listener) throws IOException;
+
+    /**
+     * The catalogue table of rows measured with {@code request}: exactly the columns and cells of
+     * the catalogue file that {@link #measure} writes for it (so that other engines, such as the
+     * survey job on Apache Spark, produce the same catalogue).
+     *
+     * @throws IllegalArgumentException for a bad request, as {@link #measure}
+     */
+    org.redward.api.catalog.CatalogTable table(MeasureRequest request, Iterable<MeasuredRow> rows, long rowCount);
 }

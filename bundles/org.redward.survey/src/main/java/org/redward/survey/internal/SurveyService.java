@@ -26,6 +26,7 @@ import org.redward.api.registry.Provided;
 import org.redward.api.survey.MeasureListener;
 import org.redward.api.survey.MeasureRequest;
 import org.redward.api.survey.MeasureSummary;
+import org.redward.api.survey.MeasuredRow;
 import org.redward.api.survey.SurveyMeasurer;
 import org.redward.api.templates.TemplateRegistry;
 import org.redward.api.templates.TemplateSet;
@@ -88,7 +89,7 @@ public final class SurveyService implements SurveyMeasurer {
             ctx = ctx.withMaskedRegions(masked.toArray(new double[0][]));
             prov.put("profile", request.profileId().get());
         }
-        Enricher enricher = Enricher.NONE;
+        Enricher enricher = enricher(request);
         prov.put("parameters", "z_min=" + request.zMin() + ",z_max=" + request.zMax() + ",time_limit_s="
                 + request.timeLimit().toMillis() / 1000.0 + ",frame=" + request.frame().orElse("none")
                 + ",cosmology=" + request.cosmologyId().orElse("default"));
@@ -114,6 +115,30 @@ public final class SurveyService implements SurveyMeasurer {
             Thread.currentThread().interrupt();
             throw new IOException("measurement interrupted", e);
         }
+    }
+
+    @Override
+    public org.redward.api.catalog.CatalogTable table(MeasureRequest request, Iterable<MeasuredRow> rows, long rowCount) {
+        CatalogLayout layout = new CatalogLayout(enricher(request).columns());
+        Iterable<Object[]> cells = () -> new java.util.Iterator<Object[]>() {
+            private final java.util.Iterator<MeasuredRow> it = rows.iterator();
+
+            @Override
+            public boolean hasNext() {
+                return it.hasNext();
+            }
+
+            @Override
+            public Object[] next() {
+                return layout.toCells(it.next());
+            }
+        };
+        return new org.redward.api.catalog.CatalogTable("catalog", "redshifts measured by redward", layout.columns(), rowCount, cells);
+    }
+
+    /** The derived columns (frame velocities, distances) the request asks for. */
+    private Enricher enricher(MeasureRequest request) {
+        return Enricher.NONE;
     }
 
     Provided<RedshiftEstimator> chooseEstimator(Optional<String> id) {
