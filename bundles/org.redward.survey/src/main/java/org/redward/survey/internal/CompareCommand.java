@@ -129,20 +129,7 @@ public final class CompareCommand implements Command {
     }
 
     private void writeTable(Path dir, List<String> ids, Comparison cmp, List<Iterable<MeasuredRow>> streams) throws IOException {
-        Iterable<Object[]> cells = () -> {
-            var it = Comparison.zip(streams).iterator();
-            return new java.util.Iterator<>() {
-                @Override
-                public boolean hasNext() {
-                    return it.hasNext();
-                }
-
-                @Override
-                public Object[] next() {
-                    return cmp.cells(it.next());
-                }
-            };
-        };
+        Iterable<Object[]> cells = CatalogLayout.map(Comparison.zip(streams), cmp::cells);
         Map<String, String> prov = new LinkedHashMap<>();
         prov.put("estimators", String.join(",", ids));
         CatalogTable t = new CatalogTable("comparison", "one row per spectrum: every estimator's answer and the differences",

@@ -131,19 +131,7 @@ public final class SurveyService implements SurveyMeasurer {
     @Override
     public org.redward.api.catalog.CatalogTable table(MeasureRequest request, Iterable<MeasuredRow> rows, long rowCount) {
         CatalogLayout layout = new CatalogLayout(enricher(request, new LinkedHashMap<>()).columns());
-        Iterable<Object[]> cells = () -> new java.util.Iterator<Object[]>() {
-            private final java.util.Iterator<MeasuredRow> it = rows.iterator();
-
-            @Override
-            public boolean hasNext() {
-                return it.hasNext();
-            }
-
-            @Override
-            public Object[] next() {
-                return layout.toCells(it.next());
-            }
-        };
+        Iterable<Object[]> cells = layout.cells(rows);
         return new org.redward.api.catalog.CatalogTable("catalog", "redshifts measured by redward", layout.columns(), rowCount, cells);
     }
 
