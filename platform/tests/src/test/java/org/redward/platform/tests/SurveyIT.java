@@ -34,9 +34,7 @@ class SurveyIT {
     @Test
     void measureWritesEveryCatalogueFormatWithTheContractKeysFirst() throws Exception {
         Path real = SharedData.realData();
-        Path drop = Files.createDirectories(temp.resolve("drop"));
-        Path jar = Path.of(System.getProperty("redward.example.jar"));
-        Files.copy(jar, drop.resolve(jar.getFileName()));
+        Path drop = dropInExample();
         Path fits = temp.resolve("real.fits");
         Product.Run r = Product.run("measure", real.toString(), "--estimator", "example-brightest-line", "--bundles", drop.toString(),
                 "--out", fits.toString());
@@ -64,9 +62,7 @@ class SurveyIT {
     @Test
     void compareOnRealSpectraMatchesEachEstimatorsOwnMeasureOutput() throws Exception {
         Path real = SharedData.realData();
-        Path drop = Files.createDirectories(temp.resolve("drop"));
-        Path jar = Path.of(System.getProperty("redward.example.jar"));
-        Files.copy(jar, drop.resolve(jar.getFileName()));
+        Path drop = dropInExample();
         String[] ids = {"lines", "example-brightest-line"};
         Map<String, List<JSONObject>> measured = new HashMap<>();
         for (String id : ids) {
@@ -117,6 +113,14 @@ class SurveyIT {
         }
         JSONObject summary = new JSONObject(Files.readString(dir.resolve("summary.json")));
         assertEquals(table.size() - 1, summary.getInt("spectra"));
+    }
+
+    /** A drop-in folder holding the example estimator bundle. */
+    private Path dropInExample() throws java.io.IOException {
+        Path drop = Files.createDirectories(temp.resolve("drop"));
+        Path jar = Path.of(System.getProperty("redward.example.jar"));
+        Files.copy(jar, drop.resolve(jar.getFileName()));
+        return drop;
     }
 
     /** A small CSV reader (RFC 4180 quotes) that skips '#' comment lines. */
