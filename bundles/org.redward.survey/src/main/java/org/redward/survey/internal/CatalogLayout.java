@@ -96,8 +96,13 @@ final class CatalogLayout {
     }
 
     Iterable<Object[]> cells(Iterable<MeasuredRow> rows) {
+        return map(rows, this::toCells);
+    }
+
+    /** A lazy view of {@code source} with {@code f} applied to each element (streams; nothing is held). */
+    static <A, B> Iterable<B> map(Iterable<A> source, java.util.function.Function<A, B> f) {
         return () -> {
-            Iterator<MeasuredRow> it = rows.iterator();
+            Iterator<A> it = source.iterator();
             return new Iterator<>() {
                 @Override
                 public boolean hasNext() {
@@ -105,8 +110,8 @@ final class CatalogLayout {
                 }
 
                 @Override
-                public Object[] next() {
-                    return toCells(it.next());
+                public B next() {
+                    return f.apply(it.next());
                 }
             };
         };

@@ -29,7 +29,7 @@ import org.redward.api.survey.MeasuredRow;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Mixin;
 
 /** {@code redward compare}: several estimators on the same spectra, side by side. */
 @Component(property = {Command.NAME + "=compare", Command.SUMMARY + "=two or more estimators on the same spectra"})
@@ -46,24 +46,12 @@ public final class CompareCommand implements Command {
                 "against grades, speed), plots and a short Markdown report, all in the --out folder.",
                 "dv = c (z_B - z_A) / (1 + z_A), the rest-frame velocity difference."})
     static final class Args {
-        @Parameters(arity = "1..*", paramLabel = "INPUTS", description = "spectrum files, folders or list files")
-        List<Path> inputs = new ArrayList<>();
+        @Mixin
+        RunOptions run = new RunOptions();
         @Option(names = "--estimators", required = true, split = ",", paramLabel = "A,B[,C]", description = "estimator ids (two or more)")
         List<String> estimators = new ArrayList<>();
         @Option(names = "--out", required = true, paramLabel = "DIR", description = "folder for the table, summary, plots and report")
         Path out;
-        @Option(names = "--templates", paramLabel = "ID", description = "template set for estimators that use one")
-        String templates;
-        @Option(names = "--profile", paramLabel = "ID", description = "force an instrument profile")
-        String profile;
-        @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: all cores)")
-        int threads;
-        @Option(names = "--time-limit", paramLabel = "SECONDS", description = "most time one spectrum may take (default: 60)")
-        double timeLimitSeconds = 60;
-        @Option(names = "--z-min", paramLabel = "Z", description = "lowest redshift searched (default: -0.005)")
-        double zMin = -0.005;
-        @Option(names = "--z-max", paramLabel = "Z", description = "highest redshift searched (default: 4)")
-        double zMax = 4.0;
         @Option(names = "--catastrophic", paramLabel = "KM_S", description = "|dv| above which a disagreement is catastrophic (default: 1000 km/s)")
         double catastrophicKmPerS = 1000;
         @Option(names = "--json", description = "print the summary as one JSON object")
@@ -73,14 +61,7 @@ public final class CompareCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException(e.getMessage());
-        }
-        if (cl.isUsageHelpRequested() || cl.isVersionHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!RunOptions.parse(a, arguments, ctx)) {
             return 0;
         }
         List<String> ids = a.estimators.stream().map(String::trim).filter(s -> !s.isEmpty()).distinct().toList();
@@ -90,15 +71,7 @@ public final class CompareCommand implements Command {
         if (!(a.catastrophicKmPerS > 0)) {
             throw new UsageException("--catastrophic " + a.catastrophicKmPerS + ": must be positive");
         }
-        MeasureCommand.Args m = new MeasureCommand.Args();
-        m.inputs = a.inputs;
-        m.templates = a.templates;
-        m.profile = a.profile;
-        m.threads = a.threads;
-        m.timeLimitSeconds = a.timeLimitSeconds;
-        m.zMin = a.zMin;
-        m.zMax = a.zMax;
-        MeasureRequest base = MeasureCommand.request(ctx, m);
+        MeasureRequest base = a.run.request(ctx);
         for (String id : ids) {
             try {
                 survey.chooseEstimator(java.util.Optional.of(id));
@@ -115,7 +88,7 @@ public final class CompareCommand implements Command {
             MeasureSummary s;
             try (BufferedWriter w = Files.newBufferedWriter(rows, StandardCharsets.UTF_8);
                     Progress progress = ctx.progress("compare: " + id, -1)) {
-                s = survey.measure(base.withEstimator(id).withTemplates(usesTemplates(id) ? a.templates : null), row -> {
+                s = survey.measure(base.withEstimator(id).withTemplates(usesTemplates(id) ? a.run.templates : null), row -> {
                     try {
                         w.write(RowCodec.toJson(row).toString());
                         w.write('\n');
@@ -156,20 +129,7 @@ public final class CompareCommand implements Command {
     }
 
     private void writeTable(Path dir, List<String> ids, Comparison cmp, List<Iterable<MeasuredRow>> streams) throws IOException {
-        Iterable<Object[]> cells = () -> {
-            var it = Comparison.zip(streams).iterator();
-            return new java.util.Iterator<>() {
-                @Override
-                public boolean hasNext() {
-                    return it.hasNext();
-                }
-
-                @Override
-                public Object[] next() {
-                    return cmp.cells(it.next());
-                }
-            };
-        };
+        Iterable<Object[]> cells = CatalogLayout.map(Comparison.zip(streams), cmp::cells);
         Map<String, String> prov = new LinkedHashMap<>();
         prov.put("estimators", String.join(",", ids));
         CatalogTable t = new CatalogTable("comparison", "one row per spectrum: every estimator's answer and the differences",

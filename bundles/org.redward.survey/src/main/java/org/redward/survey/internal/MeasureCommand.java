@@ -2,8 +2,6 @@ package org.redward.survey.internal;
 
 import java.io.PrintStream;
 import java.nio.file.Path;
-import java.time.Duration;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -21,7 +19,7 @@ import org.redward.api.survey.MeasuredRow;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Mixin;
 
 /** {@code redward measure}: redshifts, classes, velocities, distances of many spectra into a catalogue. */
 @Component(property = {Command.NAME + "=measure", Command.SUMMARY + "=redshifts, classes, velocities, distances -> catalogue"})
@@ -38,30 +36,18 @@ public final class MeasureCommand implements Command {
                 "Rows are journalled as they come: after a crash, run the same command with --resume.",
                 "The catalogue format follows the --out extension: .fits, .vot/.xml, .ecsv, .csv."})
     static final class Args {
-        @Parameters(arity = "1..*", paramLabel = "INPUTS", description = "spectrum files, folders or list files")
-        List<Path> inputs = new ArrayList<>();
+        @Mixin
+        RunOptions run = new RunOptions();
         @Option(names = "--estimator", paramLabel = "ID", description = "redshift estimator id (default: xcorr if installed)")
         String estimator;
-        @Option(names = "--templates", paramLabel = "ID", description = "template set id (default: standard if installed)")
-        String templates;
-        @Option(names = "--profile", paramLabel = "ID", description = "force an instrument profile")
-        String profile;
         @Option(names = "--frame", paramLabel = "FRAME", description = "velocity frame for the corrected columns: bary, helio, cmb or lg")
         String frame;
         @Option(names = "--cosmology", paramLabel = "ID", description = "named cosmology for the distances (default: planck2018)")
         String cosmology;
         @Option(names = "--out", paramLabel = "FILE", description = "catalogue file (written atomically; journal beside it until done)")
         Path out;
-        @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: all cores)")
-        int threads;
         @Option(names = "--resume", description = "finish the interrupted run whose journal sits beside --out")
         boolean resume;
-        @Option(names = "--time-limit", paramLabel = "SECONDS", description = "most time one spectrum may take (default: 60)")
-        double timeLimitSeconds = 60;
-        @Option(names = "--z-min", paramLabel = "Z", description = "lowest redshift searched (default: -0.005)")
-        double zMin = -0.005;
-        @Option(names = "--z-max", paramLabel = "Z", description = "highest redshift searched (default: 4)")
-        double zMax = 4.0;
         @Option(names = "--json", description = "one JSON object per line per spectrum on standard output")
         boolean json;
     }
@@ -69,17 +55,15 @@ public final class MeasureCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException(e.getMessage());
-        }
-        if (cl.isUsageHelpRequested() || cl.isVersionHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!RunOptions.parse(a, arguments, ctx)) {
             return 0;
         }
-        MeasureRequest req = request(ctx, a);
+        if (a.frame != null && !FRAMES.contains(a.frame.toLowerCase(Locale.ROOT))) {
+            throw new UsageException("--frame " + a.frame + ": expected one of " + String.join(", ", FRAMES));
+        }
+        MeasureRequest req = a.run.request(ctx).withEstimator(a.estimator)
+                .withFrame(a.frame == null ? null : a.frame.toLowerCase(Locale.ROOT)).withCosmology(a.cosmology)
+                .withOutput(a.out == null ? null : ctx.workingDirectory().resolve(a.out)).withResume(a.resume);
         PrintStream out = ctx.out();
         MeasureListener listener = a.json ? row -> out.println(RowCodec.toJson(row))
                 : a.out == null ? new TextRows(out) : MeasureListener.none();
@@ -93,37 +77,18 @@ public final class MeasureCommand implements Command {
         return s.total() > 0 && s.ok() == 0 ? 1 : 0;
     }
 
-    static MeasureRequest request(CommandContext ctx, Args a) {
-        if (a.frame != null && !FRAMES.contains(a.frame.toLowerCase(Locale.ROOT))) {
-            throw new UsageException("--frame " + a.frame + ": expected one of " + String.join(", ", FRAMES));
-        }
-        if (a.threads < 0) {
-            throw new UsageException("--threads " + a.threads + ": must be positive");
-        }
-        if (!(a.timeLimitSeconds > 0)) {
-            throw new UsageException("--time-limit " + a.timeLimitSeconds + ": must be positive");
-        }
-        if (!(a.zMin < a.zMax)) {
-            throw new UsageException("--z-min " + a.zMin + " must be below --z-max " + a.zMax);
-        }
-        List<Path> inputs = new ArrayList<>();
-        for (Path p : a.inputs) {
-            String s = p.toString();
-            inputs.add(s.startsWith("@") ? Path.of("@" + ctx.workingDirectory().resolve(s.substring(1)))
-                    : ctx.workingDirectory().resolve(p));
-        }
-        return MeasureRequest.of(inputs).withEstimator(a.estimator).withTemplates(a.templates).withProfile(a.profile)
-                .withFrame(a.frame == null ? null : a.frame.toLowerCase(Locale.ROOT)).withCosmology(a.cosmology)
-                .withOutput(a.out == null ? null : ctx.workingDirectory().resolve(a.out)).withThreads(a.threads)
-                .withResume(a.resume).withTimeLimit(Duration.ofMillis(Math.round(a.timeLimitSeconds * 1000)))
-                .withRedshiftRange(a.zMin, a.zMax);
-    }
-
     static void report(PrintStream err, MeasureSummary s) {
         err.printf(Locale.ROOT, "measured %d spectra: %d ok, %d failed%s in %.1f s (%.1f spectra/s)%n", s.total(), s.ok(),
                 s.failed(), s.resumed() > 0 ? " (" + s.resumed() + " done by the interrupted run)" : "", s.seconds(),
                 s.spectraPerSecond());
         s.catalog().ifPresent(c -> err.println("catalogue: " + c));
+        long peak = 0;
+        for (java.lang.management.MemoryPoolMXBean p : java.lang.management.ManagementFactory.getMemoryPoolMXBeans()) {
+            if (p.getType() == java.lang.management.MemoryType.HEAP) {
+                peak += p.getPeakUsage().getUsed();
+            }
+        }
+        err.printf(Locale.ROOT, "peak heap: at most %.0f MiB%n", peak / 1048576.0);
         for (Map.Entry<String, String> e : s.misbehaving().entrySet()) {
             err.println("misbehaving plug-in: " + e.getKey() + ": " + e.getValue());
         }

@@ -15,6 +15,11 @@ import org.osgi.service.component.annotations.ReferencePolicyOption;
 import org.redward.api.catalog.CatalogWriter;
 import org.redward.api.catalog.CatalogWriterRegistry;
 import org.redward.api.commands.PlatformInfo;
+import org.redward.api.cosmology.CosmologyCalculator;
+import org.redward.api.cosmology.CosmologyParameters;
+import org.redward.api.cosmology.CosmologyRegistry;
+import org.redward.api.frames.Frame;
+import org.redward.api.frames.FrameCorrector;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.ProfileRegistry;
 import org.redward.api.formats.ReadOptions;
@@ -54,6 +59,12 @@ public final class SurveyService implements SurveyMeasurer {
     CatalogWriterRegistry writers;
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
     volatile PlatformInfo platform;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
+    volatile CosmologyRegistry cosmologies;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
+    volatile CosmologyCalculator calculator;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
+    volatile FrameCorrector frames;
 
     @Override
     public MeasureSummary measure(MeasureRequest request, MeasureListener listener) throws IOException {
@@ -89,7 +100,7 @@ public final class SurveyService implements SurveyMeasurer {
             ctx = ctx.withMaskedRegions(masked.toArray(new double[0][]));
             prov.put("profile", request.profileId().get());
         }
-        Enricher enricher = enricher(request);
+        Enricher enricher = enricher(request, prov);
         prov.put("parameters", "z_min=" + request.zMin() + ",z_max=" + request.zMax() + ",time_limit_s="
                 + request.timeLimit().toMillis() / 1000.0 + ",frame=" + request.frame().orElse("none")
                 + ",cosmology=" + request.cosmologyId().orElse("default"));
@@ -119,26 +130,41 @@ public final class SurveyService implements SurveyMeasurer {
 
     @Override
     public org.redward.api.catalog.CatalogTable table(MeasureRequest request, Iterable<MeasuredRow> rows, long rowCount) {
-        CatalogLayout layout = new CatalogLayout(enricher(request).columns());
-        Iterable<Object[]> cells = () -> new java.util.Iterator<Object[]>() {
-            private final java.util.Iterator<MeasuredRow> it = rows.iterator();
-
-            @Override
-            public boolean hasNext() {
-                return it.hasNext();
-            }
-
-            @Override
-            public Object[] next() {
-                return layout.toCells(it.next());
-            }
-        };
+        CatalogLayout layout = new CatalogLayout(enricher(request, new LinkedHashMap<>()).columns());
+        Iterable<Object[]> cells = layout.cells(rows);
         return new org.redward.api.catalog.CatalogTable("catalog", "redshifts measured by redward", layout.columns(), rowCount, cells);
     }
 
-    /** The derived columns (frame velocities, distances) the request asks for. */
-    private Enricher enricher(MeasureRequest request) {
-        return Enricher.NONE;
+    /** Frame velocities and distances, when the cosmology services are installed. */
+    private Enricher enricher(MeasureRequest request, Map<String, String> prov) {
+        Optional<Frame> frame = request.frame().map(SurveyService::frame);
+        CosmologyRegistry reg = cosmologies;
+        CosmologyCalculator calc = calculator;
+        if (reg == null || calc == null) {
+            if (request.cosmologyId().isPresent() || frame.isPresent()) {
+                throw new IllegalArgumentException("--cosmology/--frame: the cosmology services are not installed");
+            }
+            prov.put("cosmology", "none (cosmology services not installed): no distances");
+            return Enricher.NONE;
+        }
+        String id = request.cosmologyId().orElse(CosmologyRegistry.DEFAULT_ID);
+        CosmologyParameters p = require(reg.find(id), "--cosmology", id, reg.ids()).service().parameters();
+        prov.put("cosmology", id);
+        prov.put("cosmology.parameters", p.toString());
+        prov.put("cosmology.citation", p.citation());
+        frame.ifPresent(f -> prov.put("frame", f.key()));
+        return new CosmoEnricher(calc.of(p), id, Optional.ofNullable(frames), frame, request.frame().orElse(""));
+    }
+
+    /** The frame of a {@code --frame} word. */
+    static Frame frame(String word) {
+        return switch (word) {
+            case "bary" -> Frame.BARYCENTRIC;
+            case "helio" -> Frame.HELIOCENTRIC;
+            case "cmb" -> Frame.CMB;
+            case "lg" -> Frame.LOCAL_GROUP;
+            default -> throw new IllegalArgumentException("--frame " + word + ": expected one of bary, helio, cmb, lg");
+        };
     }
 
     Provided<RedshiftEstimator> chooseEstimator(Optional<String> id) {

@@ -48,11 +48,22 @@ class PlatformIT {
         assertEquals(0, with.status(), with.toString());
         assertTrue(with.out().contains("\"id\":\"example-brightest-line\""), with.toString());
         assertTrue(with.out().contains(drop.toString()), "the drop-in folder is named as the bundle's origin");
+        // the dropped-in estimator measures a real spectrum (SDSS, published z = 0.0674; see realdata/truth.tsv)
+        Path spectrum = org.redward.testkit.SharedData.realData().resolve("spec-0266-51630-0168.fits");
+        Product.Run measured = Product.run("measure", "--json", "--estimator", "example-brightest-line",
+                "--bundles", drop.toString(), spectrum.toString());
+        assertEquals(0, measured.status(), measured.toString());
+        assertTrue(measured.out().contains("\"estimator\":\"example-brightest-line\""), measured.toString());
+        assertTrue(measured.out().contains("\"status\":\"ok\""), measured.toString());
 
         Files.delete(drop.resolve(jar.getFileName()));
         Product.Run without = Product.run("plugins", "--json", "--bundles", drop.toString());
         assertEquals(0, without.status(), without.toString());
         assertFalse(without.out().contains("example-brightest-line"), without.toString());
+        Product.Run gone = Product.run("measure", "--json", "--estimator", "example-brightest-line",
+                "--bundles", drop.toString(), spectrum.toString());
+        assertEquals(2, gone.status(), gone.toString());
+        assertTrue(gone.err().contains("--estimator example-brightest-line: unknown"), gone.toString());
     }
 
     @Test
