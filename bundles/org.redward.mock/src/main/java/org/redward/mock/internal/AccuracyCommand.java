@@ -109,22 +109,11 @@ public final class AccuracyCommand implements Command {
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
         try (SurveyStore store = SurveyStore.open(out)) {
-            for (String left : store.removeLeftovers()) {
-                ctx.err().println("redward accuracy: removed " + store.root().resolve(left) + ", left half-written by an interrupted run");
-            }
+            Services services = new Services(readers, inputs, estimators, templates);
+            DemoRun prep = new DemoRun(ctx, services);
+            prep.removeLeftovers(store);
             long t0 = System.nanoTime();
-            Path survey = store.surveyFolder(a.seed, a.size);
-            if (!store.hasSurvey(a.seed, a.size)) {
-                try (var p = ctx.progress("generating the mock survey", a.size)) {
-                    long[] last = {0};
-                    store.generate(a.seed, a.size, n -> {
-                        synchronized (last) {
-                            p.advance(n - last[0]);
-                            last[0] = n;
-                        }
-                    }, ctx.err());
-                }
-            }
+            Path survey = prep.survey(store, a.seed, a.size, false);
             double genSeconds = DemoRun.secs(t0);
             List<TruthRow> truth = SurveyGenerator.readTruth(survey.resolve("truth.csv"));
             Map<String, TruthRow> byFibre = new HashMap<>();
@@ -133,7 +122,7 @@ public final class AccuracyCommand implements Command {
             try (var s = Files.list(survey)) {
                 files = s.filter(p -> p.getFileName().toString().endsWith(".fits")).sorted().toList();
             }
-            Measurer m = new Measurer(ctx, new Services(readers, inputs, estimators, templates));
+            Measurer m = new Measurer(ctx, services);
             Measurer.Result mock = m.measure(files, (f, i) -> byFibre.get(f + "#" + i), chosen, a.threads, truth.size(),
                     "measuring " + truth.size() + " mock spectra with " + chosen.size() + " estimator(s)");
             Measurer.Result real = null;

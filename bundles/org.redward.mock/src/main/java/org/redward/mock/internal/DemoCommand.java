@@ -65,6 +65,8 @@ public final class DemoCommand implements Command {
         String estimator;
         @Option(names = "--fresh", description = "regenerate the survey even if a complete one exists")
         boolean fresh;
+        @Option(names = "--generate-only", description = "only generate the survey (Quill FITS files and truth.csv) and say where it is")
+        boolean generateOnly;
         @Option(names = "--threads", paramLabel = "N", description = "measuring threads (default: the number of cores)")
         int threads = Runtime.getRuntime().availableProcessors();
         @Option(names = "--json", description = "print the summary as one JSON object")
@@ -101,6 +103,9 @@ public final class DemoCommand implements Command {
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
         DemoRun run = new DemoRun(ctx, new Services(readers, inputs, estimators, templates));
         try (SurveyStore store = SurveyStore.open(out)) {
+            if (a.generateOnly) {
+                return run.generateOnly(store, a.seed, a.size, a.fresh, a.json);
+            }
             return run.execute(store, a.seed, a.size, a.fresh, a.estimator, a.threads, a.json);
         } catch (IOException e) {
             ctx.err().println("redward demo: " + e.getMessage());

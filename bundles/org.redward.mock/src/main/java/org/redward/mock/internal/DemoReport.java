@@ -98,6 +98,15 @@ final class DemoReport {
             out.printf(Locale.ROOT, "  %-16s %6d   %s%n", e.getKey(), n, g.toString().trim());
         }
         out.println();
+        if (rows.stream().noneMatch(r -> r.measured)) {
+            out.println("  nothing was measured, so there is nothing to score against the truth (see the steps above)");
+        } else {
+            againstTruth(out);
+        }
+        printCautionsAndFiles(out, results, seconds);
+    }
+
+    private void againstTruth(PrintStream out) {
         out.println("  against the truth of the survey (success: |z - z_true|/(1+z_true) < 0.001; catastrophic: > 0.01)");
         out.printf(Locale.ROOT, "  %-14s %8s %9s %9s %13s %12s %15s%n", "true class", "objects", "measured", "success",
                 "catastrophic", "class right", "dv NMAD km/s");
@@ -110,6 +119,9 @@ final class DemoReport {
         int fdn = fd.values().stream().mapToInt(Integer::intValue).sum();
         out.printf(Locale.ROOT, "  %d fibres held no object (empty or broken); %d of them were given a redshift%s%n", empty, fdn,
                 fdn > 0 ? " " + fd : "");
+    }
+
+    private void printCautionsAndFiles(PrintStream out, Path results, double seconds) {
         if (!cautions.isEmpty()) {
             out.println();
             out.println("  cautions:");

@@ -1,8 +1,6 @@
 package org.redward.mock.internal;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.io.PrintStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -12,26 +10,13 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.Semaphore;
 
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.Progress;
-import org.redward.api.formats.ReaderRegistry;
-import org.redward.api.formats.SpectrumReader;
-import org.redward.api.formats.SpectrumRecord;
-import org.redward.api.formats.SpectrumSource;
-import org.redward.api.redshift.EstimationContext;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.redshift.RedshiftEstimator;
-import org.redward.api.redshift.RedshiftSolution;
 import org.redward.api.registry.Provided;
-import org.redward.api.templates.TemplateRegistry;
-import org.redward.api.templates.TemplateSet;
-import org.redward.spectrum.Spectrum;
 
 /** One run of the demo: the steps in order, their status and timing, and the summary. Not thread-safe. */
 final class DemoRun {
@@ -61,28 +46,9 @@ final class DemoRun {
     int execute(SurveyStore store, long seed, int size, boolean fresh, String estimatorId, int threads, boolean json)
             throws IOException {
         long t0 = System.nanoTime();
-        PrintStream err = ctx.err();
-        for (String left : store.removeLeftovers()) {
-            err.println("redward demo: removed " + store.root().resolve(left) + ", left half-written by an interrupted run");
-        }
+        removeLeftovers(store);
         // 1. survey
-        long t = System.nanoTime();
-        Path survey = store.surveyFolder(seed, size);
-        if (!fresh && store.hasSurvey(seed, size)) {
-            steps.add(new Step("generate survey", "reused", size + " fibres in " + survey.getFileName(), secs(t)));
-        } else {
-            try (Progress p = ctx.progress("generating the invented survey", size)) {
-                long[] last = {0};
-                store.generate(seed, size, n -> {
-                    synchronized (last) {
-                        p.advance(n - last[0]);
-                        last[0] = n;
-                    }
-                }, err);
-            }
-            steps.add(new Step("generate survey", "done", size + " fibres, " + new SurveyGenerator(seed, size).files()
-                    + " Quill files", secs(t)));
-        }
+        Path survey = survey(store, seed, size, fresh);
         List<TruthRow> truth = SurveyGenerator.readTruth(survey.resolve("truth.csv"));
         Map<String, TruthRow> truthByFibre = new LinkedHashMap<>();
         for (TruthRow r : truth) {
@@ -112,6 +78,52 @@ final class DemoRun {
             ctx.out().println(report.json(published, total));
         } else {
             report.printSummary(ctx.out(), published, total);
+        }
+        return 0;
+    }
+
+    void removeLeftovers(SurveyStore store) throws IOException {
+        for (String left : store.removeLeftovers()) {
+            ctx.err().println("redward: removed " + store.root().resolve(left) + ", left half-written by an interrupted run");
+        }
+    }
+
+    /** The survey folder: reused when complete (and not {@code fresh}), generated otherwise. */
+    Path survey(SurveyStore store, long seed, int size, boolean fresh) throws IOException {
+        long t = System.nanoTime();
+        Path survey = store.surveyFolder(seed, size);
+        if (!fresh && store.hasSurvey(seed, size)) {
+            steps.add(new Step("generate survey", "reused", size + " fibres in " + survey.getFileName(), secs(t)));
+            return survey;
+        }
+        try (Progress p = ctx.progress("generating the invented survey", size)) {
+            long[] last = {0};
+            store.generate(seed, size, n -> {
+                synchronized (last) {
+                    p.advance(n - last[0]);
+                    last[0] = n;
+                }
+            }, ctx.err());
+        }
+        steps.add(new Step("generate survey", "done", size + " fibres, " + new SurveyGenerator(seed, size).files()
+                + " Quill files", secs(t)));
+        return survey;
+    }
+
+    /** {@code demo --generate-only}: the survey and where it is. */
+    int generateOnly(SurveyStore store, long seed, int size, boolean fresh, boolean json) throws IOException {
+        removeLeftovers(store);
+        Path survey = survey(store, seed, size, fresh);
+        Step s = steps.get(steps.size() - 1);
+        int files = new SurveyGenerator(seed, size).files();
+        if (json) {
+            ctx.out().println(Json.object().put("survey", survey.toString()).put("seed", seed).put("size", size)
+                    .put("status", s.status()).put("files", files).put("truth", survey.resolve("truth.csv").toString())
+                    .put("seconds", s.seconds()));
+        } else {
+            ctx.out().printf(Locale.ROOT, "%s the invented survey: %d fibres in %d Quill files, seed %d (%.1f s)%n",
+                    s.status().equals("reused") ? "reused" : "generated", size, files, seed, s.seconds());
+            ctx.out().println("  files and truth.csv: " + survey);
         }
         return 0;
     }
