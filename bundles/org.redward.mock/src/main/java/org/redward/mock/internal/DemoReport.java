@@ -21,6 +21,9 @@ final class DemoReport {
     static final String SCENARIO = "the invented Ember field, observed with the invented Quill fibre spectrograph on the "
             + "Ossel 2.6m telescope at the invented Quenta Ridge Observatory";
 
+    /** Cautions printed on the terminal (all of them go into the report). */
+    static final int SHOWN_CAUTIONS = 8;
+
     private final long seed;
     private final int size;
     private final Path survey;
@@ -44,19 +47,23 @@ final class DemoReport {
     }
 
     private void addWarningsSummary() {
-        // group the estimators' warnings by their wording with the numbers taken out
+        // group the estimators' warnings by their wording up to the first colon, numbers taken out
         Map<String, Integer> counts = new TreeMap<>();
         Map<String, String> example = new TreeMap<>();
         for (Row r : rows) {
             for (String w : r.warnings) {
                 String key = w.replaceAll("[-+]?\\d+(\\.\\d+)?", "#");
+                int colon = key.indexOf(':');
+                key = colon > 0 ? key.substring(0, colon) : key;
                 counts.merge(key, 1, Integer::sum);
                 example.putIfAbsent(key, w);
             }
         }
-        for (Map.Entry<String, Integer> e : counts.entrySet()) {
+        List<Map.Entry<String, Integer>> kinds = new ArrayList<>(counts.entrySet());
+        kinds.sort((a, b) -> b.getValue() - a.getValue());
+        for (Map.Entry<String, Integer> e : kinds) {
             cautions.add(e.getValue() == 1 ? "1 spectrum: " + example.get(e.getKey())
-                    : e.getValue() + " spectra: " + example.get(e.getKey()) + " (and similar)");
+                    : e.getValue() + " spectra, e.g.: " + example.get(e.getKey()));
         }
     }
 
@@ -125,8 +132,12 @@ final class DemoReport {
         if (!cautions.isEmpty()) {
             out.println();
             out.println("  cautions:");
-            for (String c : cautions) {
-                out.println("    - " + c);
+            int shown = Math.min(cautions.size(), SHOWN_CAUTIONS);
+            for (String c : cautions.subList(0, shown)) {
+                out.println("    - " + (c.length() > 200 ? c.substring(0, 197) + "..." : c));
+            }
+            if (cautions.size() > shown) {
+                out.println("    - and " + (cautions.size() - shown) + " more in report.md");
             }
         }
         out.println();
