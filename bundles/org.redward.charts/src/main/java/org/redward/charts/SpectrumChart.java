@@ -19,6 +19,7 @@ import org.jfree.chart.plot.Marker;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.DeviationRenderer;
+import org.jfree.chart.renderer.xy.SamplingXYLineRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.ui.Layer;
 import org.jfree.chart.ui.RectangleAnchor;
@@ -129,8 +130,9 @@ public final class SpectrumChart {
 
         NumberAxis x = new NumberAxis("Observed wavelength, vacuum (Å)");
         NumberAxis y = new NumberAxis(spectrum.fluxUnit().isBlank() ? "Flux" : "Flux (" + spectrum.fluxUnit() + ")");
-        XYLineAndShapeRenderer fluxRenderer = new XYLineAndShapeRenderer(true, false);
-        fluxRenderer.setDrawSeriesLineAsPath(true);
+        // draws at most a few points per pixel column (min and max), so a 4,000-pixel spectrum costs
+        // what its width on screen costs; gaps at masked pixels are kept
+        SamplingXYLineRenderer fluxRenderer = new SamplingXYLineRenderer();
         fluxRenderer.setSeriesPaint(0, ChartStyle.FLUX);
         fluxRenderer.setSeriesStroke(0, ChartStyle.THIN);
         XYPlot plot = new XYPlot(null, x, y, null);
@@ -164,8 +166,7 @@ public final class SpectrumChart {
             plot.setRangeAxis(1, skyAxis);
             plot.setDataset(SKY, new XYSeriesCollection(s));
             plot.mapDatasetToRangeAxis(SKY, 1);
-            XYLineAndShapeRenderer skyRenderer = new XYLineAndShapeRenderer(true, false);
-            skyRenderer.setDrawSeriesLineAsPath(true);
+            SamplingXYLineRenderer skyRenderer = new SamplingXYLineRenderer();
             skyRenderer.setSeriesPaint(0, ChartStyle.withAlpha(ChartStyle.SKY, 170));
             skyRenderer.setSeriesStroke(0, ChartStyle.THIN);
             plot.setRenderer(SKY, skyRenderer);
@@ -176,7 +177,7 @@ public final class SpectrumChart {
         y.setRange(fluxRange);
         x.setRange(wl[0], wl[n - 1]);
 
-        if (!found.isEmpty()) {
+        {
             XYSeries em = new XYSeries("found (emission)", false, true);
             XYSeries ab = new XYSeries("found (absorption)", false, true);
             double offset = 0.04 * fluxRange.getLength();
@@ -197,9 +198,12 @@ public final class SpectrumChart {
             r.setSeriesShape(1, triangle(false));
             r.setSeriesPaint(0, ChartStyle.DETECTED);
             r.setSeriesPaint(1, ChartStyle.DETECTED);
+            // always present: markers of index 0 are drawn only where dataset 0 has a renderer
             plot.setDataset(FOUND, foundData);
             plot.setRenderer(FOUND, r);
-            legend.add(new LegendItem("line found", null, null, null, triangle(true), ChartStyle.DETECTED));
+            if (!found.isEmpty()) {
+                legend.add(new LegendItem("line found", null, null, null, triangle(true), ChartStyle.DETECTED));
+            }
         }
 
         for (double[] run : maskedRuns(wl, mask)) {
@@ -307,22 +311,41 @@ public final class SpectrumChart {
         }
     }
 
+    /**
+     * The 1-sigma band as one series (one polygon: cheap to draw). Over masked pixels the band
+     * closes to zero width on the line joining the nearest usable pixels, so no value of a bad
+     * pixel is shown.
+     */
     private static YIntervalSeriesCollection band(double[] wl, double[] flux, double[] ivar, boolean[] mask) {
         YIntervalSeriesCollection c = new YIntervalSeriesCollection();
-        YIntervalSeries current = null;
-        int k = 0;
-        for (int i = 0; i < wl.length; i++) {
-            if (mask[i] || !(ivar[i] > 0)) {
-                current = null;
+        YIntervalSeries s = new YIntervalSeries("band", false, true);
+        int n = wl.length;
+        int prev = -1;
+        for (int i = 0; i < n; i++) {
+            boolean good = !mask[i] && ivar[i] > 0;
+            if (good) {
+                double sigma = 1.0 / Math.sqrt(ivar[i]);
+                s.add(new org.jfree.data.xy.YIntervalDataItem(wl[i], flux[i], flux[i] - sigma, flux[i] + sigma), false);
+                prev = i;
                 continue;
             }
-            if (current == null) {
-                current = new YIntervalSeries("band" + k++, false, true);
-                c.addSeries(current);
+            int next = i + 1;
+            while (next < n && (mask[next] || !(ivar[next] > 0))) {
+                next++;
             }
-            double sigma = 1.0 / Math.sqrt(ivar[i]);
-            current.add(new org.jfree.data.xy.YIntervalDataItem(wl[i], flux[i], flux[i] - sigma, flux[i] + sigma), false);
+            double y;
+            if (prev < 0 && next >= n) {
+                return c;
+            } else if (prev < 0) {
+                y = flux[next];
+            } else if (next >= n) {
+                y = flux[prev];
+            } else {
+                y = flux[prev] + (flux[next] - flux[prev]) * (wl[i] - wl[prev]) / (wl[next] - wl[prev]);
+            }
+            s.add(new org.jfree.data.xy.YIntervalDataItem(wl[i], y, y, y), false);
         }
+        c.addSeries(s);
         return c;
     }
 
@@ -358,8 +381,10 @@ public final class SpectrumChart {
     }
 
     /**
-     * The flux range shown: the 0.5th to 99.5th percentile of usable pixels, widened by 8% below
-     * and 22% above (room for line labels). A spectrum with no usable pixel gives [0, 1].
+     * The flux range shown: from the 0.5th percentile of usable pixels less 8% of the 0.5-99.5
+     * percentile span, up to the highest usable pixel but at most three spans above the 99.5th
+     * percentile (strong emission lines stay in view, a lone cosmic ray does not flatten the
+     * spectrum), plus 15% room for line labels. A spectrum with no usable pixel gives [0, 1].
      */
     static Range robustRange(double[] flux, boolean[] mask) {
         double[] v = new double[flux.length];
@@ -380,7 +405,9 @@ public final class SpectrumChart {
         if (!(span > 0)) {
             span = Math.max(Math.abs(hi), 1.0);
         }
-        return new Range(lo - 0.08 * span, hi + 0.22 * span);
+        double top = Math.min(v[m - 1], hi + 3 * span);
+        top = Math.max(top, hi);
+        return new Range(lo - 0.08 * span, top + 0.15 * (top - lo));
     }
 
     private static Range skyRange(double[] sky) {

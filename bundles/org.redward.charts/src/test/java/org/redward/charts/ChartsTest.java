@@ -85,6 +85,31 @@ class ChartsTest {
     }
 
     @Test
+    void restLinesAreVisibleWithoutFoundLines() {
+        // regression: markers are drawn through a dataset's renderer, so one must exist even with no found lines
+        int with = reddish(SpectrumChart.of(toySpectrum(4000)).restLines(LINES, 0.1).build());
+        int without = reddish(SpectrumChart.of(toySpectrum(4000)).restLines(LINES, Double.NaN).build());
+        assertTrue(with > without + 100, "emission-line markers drawn: " + with + " reddish pixels against " + without);
+    }
+
+    private static int reddish(JFreeChart chart) {
+        BufferedImage img = ChartExport.render(chart, 1000, 400);
+        int reddish = 0;
+        for (int y = 0; y < img.getHeight(); y++) {
+            for (int x = 0; x < img.getWidth(); x++) {
+                int rgb = img.getRGB(x, y);
+                int r = (rgb >> 16) & 0xff;
+                int g = (rgb >> 8) & 0xff;
+                int b = rgb & 0xff;
+                if (r > 170 && g < 140 && b < 130) {
+                    reddish++;
+                }
+            }
+        }
+        return reddish;
+    }
+
+    @Test
     void maskedRunsSpanPixelMidpoints() {
         double[] wl = {1, 2, 3, 4, 5, 6};
         boolean[] m = {true, false, true, true, false, true};
@@ -118,7 +143,7 @@ class ChartsTest {
         }
         String svg = Files.readString(OUT.resolve("spectrum.svg"), StandardCharsets.UTF_8);
         assertTrue(svg.contains(">5000<"), "tick label 5000 written without grouping");
-        assertFalse(svg.contains("5.000"), "no German grouping in tick labels");
+        assertFalse(svg.contains(">5.000<"), "no German grouping in tick labels");
         assertTrue(svg.contains("Å"));
         byte[] pdf = Files.readAllBytes(OUT.resolve("spectrum.pdf"));
         assertEquals("%PDF", new String(pdf, 0, 4, StandardCharsets.US_ASCII));

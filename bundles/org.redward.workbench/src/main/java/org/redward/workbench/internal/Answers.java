@@ -1,0 +1,59 @@
+package org.redward.workbench.internal;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.redward.api.redshift.Alternative;
+import org.redward.api.redshift.RedshiftSolution;
+
+/** Turns platform results into what the panels show. Pure functions; thread-safe. */
+final class Answers {
+
+    /** Above this z a Hubble-law distance is no longer a fair approximation (common practice). */
+    static final double HUBBLE_LAW_LIMIT_Z = 0.05;
+
+    private Answers() {
+    }
+
+    static MachineAnswer of(String estimatorId, RedshiftSolution s) {
+        if (!s.ok()) {
+            return MachineAnswer.failed(estimatorId, s.error());
+        }
+        List<Double> alts = new ArrayList<>();
+        for (Alternative a : s.alternatives()) {
+            alts.add(a.z());
+        }
+        if (alts.isEmpty()) {
+            alts.add(s.z());
+        }
+        return new MachineAnswer(estimatorId, true, "", s.z(), s.zError(), s.objectClass().key(), s.grade(), alts,
+                s.scoreCurve().orElse(null), s.warnings());
+    }
+
+    /**
+     * Rows {quantity, value, caution} for the velocity panel: the three velocity conventions and a
+     * Hubble-law distance for H0 = 67.66 and 73.04 km/s/Mpc (Planck Collaboration 2020, A&amp;A 641, A6,
+     * Table 2; Riess et al. 2022, ApJL 934, L7), with the caution that it only holds at low z.
+     */
+    static List<String[]> velocityRows(double z) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"z", String.format(Locale.ROOT, "%.6f", z), ""});
+        rows.add(new String[] {"cz (optical)", kms(Kinematics.opticalKmPerS(z)), z > 0.1 ? "cz is not a velocity at this z" : ""});
+        rows.add(new String[] {"radio cz/(1+z)", kms(Kinematics.radioKmPerS(z)), ""});
+        rows.add(new String[] {"relativistic", kms(Kinematics.relativisticKmPerS(z)), ""});
+        String caution = z > HUBBLE_LAW_LIMIT_Z ? "Hubble law misleads at z > " + HUBBLE_LAW_LIMIT_Z + ": use a cosmology"
+                : z < 0.003 ? "peculiar velocities dominate at this z" : "";
+        rows.add(new String[] {"cz/H0, H0 = 67.66", mpc(Kinematics.opticalKmPerS(z) / 67.66), caution});
+        rows.add(new String[] {"cz/H0, H0 = 73.04", mpc(Kinematics.opticalKmPerS(z) / 73.04), caution});
+        return rows;
+    }
+
+    private static String kms(double v) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%.1f km/s", v) : "–";
+    }
+
+    private static String mpc(double d) {
+        return Double.isFinite(d) ? String.format(Locale.ROOT, "%.1f Mpc", d) : "–";
+    }
+}

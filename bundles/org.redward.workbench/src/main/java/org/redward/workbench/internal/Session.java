@@ -1,0 +1,85 @@
+package org.redward.workbench.internal;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.eclipse.swt.widgets.Display;
+
+/**
+ * One run of the workbench on the UI thread: opens the journal and the window, fills the queue,
+ * runs the event loop until the window closes (or, for a snapshot, until the first spectrum is
+ * drawn), then closes the journal. Call {@link #run} on the display's thread.
+ */
+final class Session {
+
+    /** What the run did. */
+    record Result(int status, int spectra, int decided, double firstWindowMs, long firstWindowNanos, List<String> messages) {
+    }
+
+    private final Display display;
+    private final Backend backend;
+    private final Path journalFile;
+    private final List<String> estimators;
+    private final List<Path> files;
+    private final int width;
+    private final int height;
+    private final long startedNanos;
+
+    Session(Display display, Backend backend, Path journalFile, List<String> estimators, List<Path> files, int width, int height,
+            long startedNanos) {
+        this.display = display;
+        this.backend = backend;
+        this.journalFile = journalFile;
+        this.estimators = estimators;
+        this.files = files;
+        this.width = width;
+        this.height = height;
+        this.startedNanos = startedNanos;
+    }
+
+    Result run(Path snapshot, Path export) throws IOException {
+        List<String> messages = new ArrayList<>();
+        try (Journal journal = Journal.open(journalFile)) {
+            if (journal.unreadableLines() > 0) {
+                messages.add("journal " + journalFile + ": " + journal.unreadableLines() + " line(s) could not be read and were skipped");
+            }
+            WorkbenchWindow w = new WorkbenchWindow(display, backend, journal, estimators);
+            w.open(width, height);
+            long shownAt = System.nanoTime();
+            while (display.readAndDispatch()) {
+                // first paint
+            }
+            if (estimators.isEmpty()) {
+                w.message("no redshift estimator is installed: spectra are shown without a machine redshift");
+            }
+            w.add(files);
+            if (snapshot != null) {
+                long limit = System.nanoTime() + 60_000_000_000L;
+                while ((w.busy() || display.readAndDispatch()) && System.nanoTime() < limit) {
+                    if (!display.readAndDispatch()) {
+                        display.sleep();
+                    }
+                }
+                w.snapshot(snapshot);
+            } else {
+                while (!w.shell().isDisposed()) {
+                    if (!display.readAndDispatch()) {
+                        display.sleep();
+                    }
+                }
+            }
+            messages.addAll(w.messages());
+            int spectra = w.queue().all().size();
+            int decided = w.queue().decidedCount();
+            if (export != null) {
+                Catalogue.write(w.queue().all(), export);
+            }
+            if (!w.shell().isDisposed()) {
+                w.shell().dispose();
+            }
+            return new Result(0, spectra, decided, (shownAt - startedNanos) / 1e6, shownAt, messages);
+        }
+    }
+}

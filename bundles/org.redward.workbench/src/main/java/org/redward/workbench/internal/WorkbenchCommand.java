@@ -1,0 +1,201 @@
+package org.redward.workbench.internal;
+
+import java.lang.management.ManagementFactory;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.Executor;
+
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.SWTError;
+import org.eclipse.swt.widgets.Display;
+import org.osgi.framework.BundleContext;
+import org.osgi.service.component.annotations.Activate;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Deactivate;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+import org.redward.api.commands.Command;
+import org.redward.api.commands.CommandContext;
+import org.redward.api.commands.Json;
+import org.redward.api.commands.PlatformInfo;
+import org.redward.api.commands.UsageException;
+import org.redward.api.formats.ReaderRegistry;
+import org.redward.api.redshift.EstimatorRegistry;
+import org.redward.api.registry.ProviderRegistry;
+import org.redward.api.templates.TemplateRegistry;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code redward workbench [FILES|FOLDERS|CATALOGUE]}: the desktop inspection workbench. The SWT
+ * event loop runs on the launcher's main thread (the {@link Executor} service with
+ * {@code redward.thread=main}); this command hands the window to it and returns when the window
+ * closes.
+ */
+@Component(property = {Command.NAME + "=workbench", Command.SUMMARY + "=inspect spectra by eye and decide their redshifts (desktop)"})
+public final class WorkbenchCommand implements Command {
+
+    @Reference(target = "(redward.thread=main)")
+    private Executor mainThread;
+    @Reference
+    private ReaderRegistry readers;
+    @Reference
+    private EstimatorRegistry estimators;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile TemplateRegistry templates;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile PlatformInfo platform;
+
+    private final List<ProviderRegistry<?>> registries = new CopyOnWriteArrayList<>();
+    private BundleContext bundleContext;
+    private volatile Display display;
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bindRegistry(ProviderRegistry<?> r) {
+        registries.add(r);
+    }
+
+    void unbindRegistry(ProviderRegistry<?> r) {
+        registries.remove(r);
+    }
+
+    @Activate
+    void activate(BundleContext ctx) {
+        bundleContext = ctx;
+    }
+
+    @Deactivate
+    void deactivate() {
+        Display d = display;
+        if (d != null && !d.isDisposed()) {
+            d.asyncExec(() -> {
+                for (var s : d.getShells()) {
+                    s.dispose();
+                }
+            });
+            d.wake();
+        }
+    }
+
+    @CommandLine.Command(name = "workbench", mixinStandardHelpOptions = true,
+            description = {"Open spectra, folders or a catalogue written by 'measure' as a queue, inspect each spectrum with "
+                + "its lines at the proposed z and the estimators' score curves, and decide by eye. Every decision is "
+                + "written at once to the journal; reopening the same journal brings the decisions back."})
+    static final class Args {
+        @Parameters(paramLabel = "FILES", description = "spectrum files, folders, or a catalogue (.jsonl, .json, .csv)")
+        List<Path> files = new ArrayList<>();
+        @Option(names = "--journal", paramLabel = "FILE", description = "decisions journal (JSON lines; default: redward-decisions.jsonl in the working folder)")
+        Path journal;
+        @Option(names = "--estimators", split = ",", paramLabel = "A,B", description = "estimators to run and compare (default: the first two installed)")
+        List<String> estimators = new ArrayList<>();
+        @Option(names = "--templates", paramLabel = "ID", description = "template set for estimators that need one (default: the first installed)")
+        String templates = "";
+        @Option(names = "--who", paramLabel = "NAME", description = "the name recorded with each decision (default: the system user)")
+        String who;
+        @Option(names = "--snapshot", paramLabel = "PNG", description = "open the window, draw the first spectrum, save the window as a PNG and exit")
+        Path snapshot;
+        @Option(names = "--export", paramLabel = "FILE", description = "when the window closes, write the queue with the verdict columns (.csv or .jsonl)")
+        Path export;
+        @Option(names = "--size", paramLabel = "WxH", description = "window size in pixels (default: 1440x900)")
+        String size = "1440x900";
+        @Option(names = "--json", description = "on exit, print one JSON object: journal, spectra, decided, timings")
+        boolean json;
+    }
+
+    @Override
+    public int run(CommandContext ctx, List<String> arguments) throws Exception {
+        long started = System.nanoTime();
+        Args a = new Args();
+        CommandLine cl = new CommandLine(a);
+        try {
+            cl.parseArgs(arguments.toArray(new String[0]));
+        } catch (CommandLine.ParameterException e) {
+            throw new UsageException(e.getMessage());
+        }
+        if (cl.isUsageHelpRequested()) {
+            cl.usage(ctx.out());
+            return 0;
+        }
+        int[] wh = parseSize(a.size);
+        List<String> ids = new ArrayList<>();
+        for (String id : a.estimators) {
+            if (estimators.find(id.trim()).isEmpty()) {
+                throw new UsageException("--estimators: no estimator '" + id.trim() + "' (installed: "
+                        + (estimators.ids().isEmpty() ? "none" : String.join(", ", estimators.ids())) + ")");
+            }
+            ids.add(id.trim());
+        }
+        if (ids.isEmpty()) {
+            ids.addAll(estimators.ids().stream().limit(2).toList());
+        }
+        List<Path> files = new ArrayList<>();
+        for (Path f : a.files) {
+            files.add(ctx.workingDirectory().resolve(f));
+        }
+        Path journalFile = ctx.workingDirectory().resolve(a.journal != null ? a.journal : Path.of("redward-decisions.jsonl"));
+        String who = a.who != null ? a.who : System.getProperty("user.name", "unknown");
+        OsgiBackend backend = new OsgiBackend(bundleContext, readers, estimators, templates, platform, registries, who, a.templates);
+        Path snapshot = a.snapshot == null ? null : ctx.workingDirectory().resolve(a.snapshot);
+        Path export = a.export == null ? null : ctx.workingDirectory().resolve(a.export);
+
+        CompletableFuture<Session.Result> done = new CompletableFuture<>();
+        mainThread.execute(() -> {
+            try {
+                Display d = Display.getCurrent() != null ? Display.getCurrent() : new Display();
+                display = d;
+                done.complete(new Session(d, backend, journalFile, ids, files, wh[0], wh[1], started).run(snapshot, export));
+            } catch (SWTError e) {
+                done.completeExceptionally(new IllegalStateException("cannot open a window (" + e.getMessage()
+                        + "); is there a display? (DISPLAY=" + System.getenv("DISPLAY") + ")", e));
+            } catch (Throwable t) {
+                done.completeExceptionally(t);
+            }
+        });
+        Session.Result r;
+        try {
+            r = done.get();
+        } catch (ExecutionException e) {
+            throw e.getCause() instanceof Exception ex ? ex : e;
+        }
+        double jvmMs = System.currentTimeMillis() - ManagementFactory.getRuntimeMXBean().getStartTime() - (System.nanoTime() - r.firstWindowNanos()) / 1e6;
+        r.messages().forEach(m -> ctx.err().println("workbench: " + m));
+        if (a.json) {
+            ctx.out().println(Json.object().put("journal", journalFile.toString()).put("spectra", r.spectra()).put("decided", r.decided())
+                    .put("first_window_ms_after_command", r.firstWindowMs()).put("first_window_ms_after_process_start", jvmMs)
+                    .put("snapshot", snapshot == null ? null : snapshot.toString()));
+        } else {
+            ctx.err().printf(java.util.Locale.ROOT, "workbench: first window %.0f ms after the command started (%.0f ms after the process started); %d of %d spectra decided; journal %s%n",
+                    r.firstWindowMs(), jvmMs, r.decided(), r.spectra(), journalFile);
+            if (snapshot != null) {
+                ctx.err().println("workbench: snapshot written to " + snapshot);
+            }
+        }
+        return r.status();
+    }
+
+    static int[] parseSize(String s) throws UsageException {
+        String[] p = s.toLowerCase(java.util.Locale.ROOT).split("x");
+        try {
+            if (p.length == 2) {
+                int w = Integer.parseInt(p[0].trim());
+                int h = Integer.parseInt(p[1].trim());
+                if (w >= 400 && h >= 300 && w <= 10000 && h <= 10000) {
+                    return new int[] {w, h};
+                }
+            }
+        } catch (NumberFormatException e) {
+            // fall through
+        }
+        throw new UsageException("--size: '" + s + "' is not WIDTHxHEIGHT in pixels (from 400x300)");
+    }
+
+    /** Keeps the SWT constant referenced (the bundle imports org.eclipse.swt). */
+    static final int STYLE = SWT.NONE;
+}

@@ -1,0 +1,115 @@
+package org.redward.workbench.internal;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.stream.Stream;
+
+import org.eclipse.swt.widgets.Display;
+import org.junit.jupiter.api.Test;
+import org.redward.spectrum.Spectrum;
+import org.redward.testkit.SharedData;
+
+/**
+ * Moving to the next spectrum in a queue of 1,000 (goal: redrawn in under 100 ms): the queue
+ * cycles through the SDSS spectra of ../shared/realdata, each read once and kept (as a warm
+ * reader cache would), with two score curves of 1,500 trial redshifts each. The figure is the
+ * wall time from the move to both charts painted, at 1440x900. Prints figures; asserts nothing
+ * about time. Run with {@code mvn -B verify -Pbenchmarks}.
+ */
+class QueueRedrawBenchmark {
+
+    /** The test backend with every spectrum and answer kept after the first read. */
+    static final class WarmBackend extends TestBackend {
+        private final Map<Path, Loaded> spectra = new ConcurrentHashMap<>();
+        private final Map<String, MachineAnswer> answers = new ConcurrentHashMap<>();
+
+        @Override
+        public Loaded load(QueueItem item) throws IOException {
+            Loaded l = spectra.get(item.source());
+            if (l == null) {
+                l = super.load(item);
+                spectra.put(item.source(), l);
+            }
+            return l;
+        }
+
+        @Override
+        public MachineAnswer estimate(String id, Spectrum s) {
+            return answers.computeIfAbsent(id + s.metadata().objectId().orElse(""), k -> super.estimate(id, s));
+        }
+    }
+
+    @Test
+    void nextSpectrumInAQueueOfAThousand() throws Exception {
+        HeadlessDisplay.ensure();
+        List<Path> sdss;
+        try (Stream<Path> s = Files.list(SharedData.realData())) {
+            sdss = s.filter(p -> p.getFileName().toString().startsWith("spec-") && !p.getFileName().toString().startsWith("spec-55862"))
+                    .sorted().toList();
+        }
+        List<Path> queue = new ArrayList<>();
+        for (int i = 0; i < 1000; i++) {
+            queue.add(sdss.get(i % sdss.size()));
+        }
+        Display display = Display.getDefault();
+        WarmBackend backend = new WarmBackend();
+        // warm: read every file and run both estimators once
+        for (Path p : sdss) {
+            Spectrum s = backend.load(new QueueItem(p, 0, null)).spectrum();
+            backend.estimators().forEach(id -> backend.estimate(id, s));
+        }
+        Path journal = Files.createTempFile("bench-journal", ".jsonl");
+        try (Journal j = Journal.open(journal)) {
+            WorkbenchWindow w = new WorkbenchWindow(display, backend, j, backend.estimators());
+            w.open(1440, 900);
+            w.add(queue);
+            waitDrawn(display, w);
+            int steps = 300;
+            double[] ms = new double[steps];
+            double[] drawOnly = new double[steps];
+            for (int i = 0; i < steps; i++) {
+                long t0 = System.nanoTime();
+                w.move(1);
+                waitDrawn(display, w);
+                ms[i] = (System.nanoTime() - t0) / 1e6;
+                drawOnly[i] = w.spectrumCanvas().lastDrawMillis() + w.scoreCanvas().lastDrawMillis();
+            }
+            report("next spectrum, move to both charts painted", ms);
+            report("next spectrum, Java2D drawing of both charts", drawOnly);
+            System.out.printf(Locale.ROOT, "BENCHMARK workbench queue of %d spectra, %d moves at 1440x900 (goal < 100 ms)%n",
+                    w.queue().all().size(), steps);
+            w.shell().dispose();
+        } finally {
+            Files.deleteIfExists(journal);
+        }
+    }
+
+    private static void waitDrawn(Display display, WorkbenchWindow w) {
+        long limit = System.currentTimeMillis() + 30_000;
+        while (System.currentTimeMillis() < limit) {
+            while (display.readAndDispatch()) {
+                // dispatch
+            }
+            QueueItem cur = w.queue().current();
+            if (cur != null && w.shownItem() == cur && w.spectrumCanvas().chart() != null && !w.drawPending()) {
+                return;
+            }
+            display.timerExec(1, () -> { });
+            display.sleep();
+        }
+    }
+
+    private static void report(String what, double[] ms) {
+        double[] s = ms.clone();
+        Arrays.sort(s);
+        System.out.printf(Locale.ROOT, "BENCHMARK workbench %-46s median %.1f ms  p90 %.1f ms  max %.1f ms%n", what,
+                s[s.length / 2], s[(int) (s.length * 0.9)], s[s.length - 1]);
+    }
+}
