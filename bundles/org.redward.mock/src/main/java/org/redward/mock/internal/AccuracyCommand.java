@@ -109,7 +109,7 @@ public final class AccuracyCommand implements Command {
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
         try (SurveyStore store = SurveyStore.open(out)) {
-            Services services = new Services(readers, inputs, estimators, templates);
+            Services services = Services.forMeasuring(readers, inputs, estimators, templates);
             DemoRun prep = new DemoRun(ctx, services);
             prep.removeLeftovers(store);
             long t0 = System.nanoTime();

@@ -11,7 +11,11 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
+import org.redward.api.catalog.CatalogWriterRegistry;
+import org.redward.api.cosmology.CosmologyCalculator;
+import org.redward.api.cosmology.CosmologyRegistry;
 import org.redward.api.formats.SpectrumInputs;
+import org.redward.api.frames.FrameCorrector;
 import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
@@ -46,6 +50,14 @@ public final class DemoCommand implements Command {
     private TemplateRegistry templates;
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
     private volatile SpectrumInputs inputs;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile FrameCorrector frames;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyRegistry cosmologies;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyCalculator calculator;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CatalogWriterRegistry writers;
 
     @CommandLine.Command(name = "demo", mixinStandardHelpOptions = true, sortOptions = false,
             description = {"Run the whole job on a built-in invented survey (the Ember field seen by the invented Quill "
@@ -101,7 +113,7 @@ public final class DemoCommand implements Command {
             throw new UsageException("demo: --threads " + a.threads + ": at least 1");
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
-        DemoRun run = new DemoRun(ctx, new Services(readers, inputs, estimators, templates));
+        DemoRun run = new DemoRun(ctx, new Services(readers, inputs, estimators, templates, frames, cosmologies, calculator, writers));
         try (SurveyStore store = SurveyStore.open(out)) {
             if (a.generateOnly) {
                 return run.generateOnly(store, a.seed, a.size, a.fresh, a.json);

@@ -59,9 +59,11 @@ final class DemoRun {
         Optional<Provided<RedshiftEstimator>> est = chooseEstimator(estimatorId);
         List<Row> rows = readAndMeasure(survey, truthByFibre, est, threads);
         // 4-7. frames, distances, catalogue, plots
-        steps.add(new Step("frame corrections", "not available", "no frame-correction service in this build", 0));
-        steps.add(new Step("distances", "not available", "no cosmology service in this build", 0));
-        steps.add(new Step("catalogue", "not available", "no catalogue writers in this build", 0));
+        DemoSteps more = new DemoSteps(cautions);
+        steps.add(more.frames(services.frames(), rows));
+        steps.add(more.distances(services.cosmologies(), services.calculator(), rows));
+        steps.add(more.catalogue(services.writers(), rows, results,
+                DemoSteps.provenance(seed, size, est.map(Provided::toString).orElse("none"))));
         steps.add(plots(results, rows));
         // 8. score and report
         Scorecard card = Scorecard.of(rows.stream().map(Row::outcome).toList());
@@ -171,8 +173,18 @@ final class DemoRun {
 
     private Step plots(Path folder, List<Row> rows) {
         long t = System.nanoTime();
+        java.util.function.DoubleUnaryOperator dl = null;
+        double dh = Double.NaN;
+        if (services.cosmologies() != null && services.calculator() != null) {
+            var set = services.cosmologies().find(DemoSteps.COSMOLOGY);
+            if (set.isPresent()) {
+                var cosmo = services.calculator().of(set.get().service().parameters());
+                dl = cosmo::luminosityDistanceMpc;
+                dh = cosmo.hubbleDistanceMpc();
+            }
+        }
         try {
-            List<String> files = DemoPlots.write(folder, rows, null, Double.NaN);
+            List<String> files = DemoPlots.write(folder, rows, dl, dh);
             return new Step("plots", "done", String.join(", ", files) + (files.contains("hubble-diagram.png") ? ""
                     : "; no Hubble diagram without distances"), secs(t));
         } catch (NoClassDefFoundError e) {
