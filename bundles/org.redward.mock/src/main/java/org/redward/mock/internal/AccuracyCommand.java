@@ -134,11 +134,12 @@ public final class AccuracyCommand implements Command {
             }
             Path partial = store.partial("results");
             AccuracyReport report = new AccuracyReport(a.seed, a.size, genSeconds, mock, real, realTruth);
-            report.write(partial);
+            String plotNote = report.write(partial);
             Path published = store.publish(partial, "results");
             report.printGoals(ctx.out());
             ctx.out().println();
-            ctx.out().println("full tables: " + published.resolve("accuracy.md") + " and accuracy.csv");
+            ctx.out().println("full tables: " + published.resolve("accuracy.md") + " and accuracy.csv"
+                    + (plotNote.isEmpty() ? "; plots success-vs-snr.png and grade-calibration.png" : "; " + plotNote));
             return mock.unavailable().isEmpty() ? 0 : 1;
         } catch (IOException e) {
             ctx.err().println("redward accuracy: " + e.getMessage());
