@@ -71,14 +71,7 @@ public final class AccuracyCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException("accuracy: " + e.getMessage());
-        }
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!Cli.parse(a, arguments, "accuracy", ctx.out())) {
             return 0;
         }
         if (a.size < MIN_SIZE || a.size > SurveyGenerator.MAX_SIZE) {

@@ -88,18 +88,7 @@ public final class DemoCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException("demo: " + e.getMessage());
-        }
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
-            return 0;
-        }
-        if (cl.isVersionHelpRequested()) {
-            ctx.out().println("demo survey generator version " + SurveyGenerator.VERSION);
+        if (!Cli.parse(a, arguments, "demo", ctx.out())) {
             return 0;
         }
         if (a.size < 1) {
