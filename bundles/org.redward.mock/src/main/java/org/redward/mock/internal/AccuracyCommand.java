@@ -75,10 +75,10 @@ public final class AccuracyCommand implements Command {
             return 0;
         }
         if (a.size < MIN_SIZE || a.size > SurveyGenerator.MAX_SIZE) {
-            throw new UsageException("accuracy: --size " + a.size + " is outside " + MIN_SIZE + ".." + SurveyGenerator.MAX_SIZE);
+            throw new UsageException("--size " + a.size + " is outside " + MIN_SIZE + ".." + SurveyGenerator.MAX_SIZE);
         }
         if (a.threads < 1) {
-            throw new UsageException("accuracy: --threads " + a.threads + ": at least 1");
+            throw new UsageException("--threads " + a.threads + ": at least 1");
         }
         List<Provided<RedshiftEstimator>> chosen = new ArrayList<>();
         if (a.estimators == null) {
@@ -88,7 +88,7 @@ public final class AccuracyCommand implements Command {
                 try {
                     chosen.add(estimators.require(id.trim()));
                 } catch (java.util.NoSuchElementException e) {
-                    throw new UsageException("accuracy: --estimators: " + e.getMessage());
+                    throw new UsageException("--estimators: " + e.getMessage());
                 }
             }
         }
@@ -98,7 +98,7 @@ public final class AccuracyCommand implements Command {
         }
         Path realDir = a.real == null ? null : ctx.workingDirectory().resolve(a.real).normalize();
         if (realDir != null && !Files.isDirectory(realDir)) {
-            throw new UsageException("accuracy: --real " + realDir + " is not a folder");
+            throw new UsageException("--real " + realDir + " is not a folder");
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
         try (SurveyStore store = SurveyStore.open(out)) {

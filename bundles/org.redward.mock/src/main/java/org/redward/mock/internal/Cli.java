@@ -24,7 +24,7 @@ final class Cli {
         try {
             cl.parseArgs(arguments.toArray(new String[0]));
         } catch (CommandLine.ParameterException e) {
-            throw new UsageException(command + ": " + e.getMessage());
+            throw new UsageException(e.getMessage());
         }
         if (cl.isUsageHelpRequested()) {
             cl.usage(out);

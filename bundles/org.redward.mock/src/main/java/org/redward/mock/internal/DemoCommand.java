@@ -92,14 +92,14 @@ public final class DemoCommand implements Command {
             return 0;
         }
         if (a.size < 1) {
-            throw new UsageException("demo: --size " + a.size + ": the survey needs at least 1 fibre");
+            throw new UsageException("--size " + a.size + ": the survey needs at least 1 fibre");
         }
         if (a.size > MAX_DEMO_SIZE) {
-            throw new UsageException("demo: --size " + a.size + " is more than the demo's limit of " + MAX_DEMO_SIZE
+            throw new UsageException("--size " + a.size + " is more than the demo's limit of " + MAX_DEMO_SIZE
                     + " fibres; for large mock surveys use 'redward accuracy --size N'");
         }
         if (a.threads < 1) {
-            throw new UsageException("demo: --threads " + a.threads + ": at least 1");
+            throw new UsageException("--threads " + a.threads + ": at least 1");
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
         DemoRun run = new DemoRun(ctx, new Services(readers, inputs, estimators, templates, frames, cosmologies, calculator, writers));

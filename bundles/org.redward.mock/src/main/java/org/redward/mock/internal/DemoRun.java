@@ -107,8 +107,8 @@ final class DemoRun {
                 }
             }, ctx.err());
         }
-        steps.add(new Step("generate survey", "done", size + " fibres, " + new SurveyGenerator(seed, size).files()
-                + " Quill files", secs(t)));
+        int files = new SurveyGenerator(seed, size).files();
+        steps.add(new Step("generate survey", "done", size + " fibres, " + files + " Quill file" + (files == 1 ? "" : "s"), secs(t)));
         return survey;
     }
 
@@ -123,8 +123,8 @@ final class DemoRun {
                     .put("status", s.status()).put("files", files).put("truth", survey.resolve("truth.csv").toString())
                     .put("seconds", s.seconds()));
         } else {
-            ctx.out().printf(Locale.ROOT, "%s the invented survey: %d fibres in %d Quill files, seed %d (%.1f s)%n",
-                    s.status().equals("reused") ? "reused" : "generated", size, files, seed, s.seconds());
+            ctx.out().printf(Locale.ROOT, "%s the invented survey: %d fibres in %d Quill file%s, seed %d (%.1f s)%n",
+                    s.status().equals("reused") ? "reused" : "generated", size, files, files == 1 ? "" : "s", seed, s.seconds());
             ctx.out().println("  files and truth.csv: " + survey);
         }
         return 0;
