@@ -71,21 +71,14 @@ public final class AccuracyCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException("accuracy: " + e.getMessage());
-        }
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!Cli.parse(a, arguments, "accuracy", ctx.out())) {
             return 0;
         }
         if (a.size < MIN_SIZE || a.size > SurveyGenerator.MAX_SIZE) {
-            throw new UsageException("accuracy: --size " + a.size + " is outside " + MIN_SIZE + ".." + SurveyGenerator.MAX_SIZE);
+            throw new UsageException("--size " + a.size + " is outside " + MIN_SIZE + ".." + SurveyGenerator.MAX_SIZE);
         }
         if (a.threads < 1) {
-            throw new UsageException("accuracy: --threads " + a.threads + ": at least 1");
+            throw new UsageException("--threads " + a.threads + ": at least 1");
         }
         List<Provided<RedshiftEstimator>> chosen = new ArrayList<>();
         if (a.estimators == null) {
@@ -95,7 +88,7 @@ public final class AccuracyCommand implements Command {
                 try {
                     chosen.add(estimators.require(id.trim()));
                 } catch (java.util.NoSuchElementException e) {
-                    throw new UsageException("accuracy: --estimators: " + e.getMessage());
+                    throw new UsageException("--estimators: " + e.getMessage());
                 }
             }
         }
@@ -105,26 +98,15 @@ public final class AccuracyCommand implements Command {
         }
         Path realDir = a.real == null ? null : ctx.workingDirectory().resolve(a.real).normalize();
         if (realDir != null && !Files.isDirectory(realDir)) {
-            throw new UsageException("accuracy: --real " + realDir + " is not a folder");
+            throw new UsageException("--real " + realDir + " is not a folder");
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
         try (SurveyStore store = SurveyStore.open(out)) {
-            for (String left : store.removeLeftovers()) {
-                ctx.err().println("redward accuracy: removed " + store.root().resolve(left) + ", left half-written by an interrupted run");
-            }
+            Services services = Services.forMeasuring(readers, inputs, estimators, templates);
+            DemoRun prep = new DemoRun(ctx, services);
+            prep.removeLeftovers(store);
             long t0 = System.nanoTime();
-            Path survey = store.surveyFolder(a.seed, a.size);
-            if (!store.hasSurvey(a.seed, a.size)) {
-                try (var p = ctx.progress("generating the mock survey", a.size)) {
-                    long[] last = {0};
-                    store.generate(a.seed, a.size, n -> {
-                        synchronized (last) {
-                            p.advance(n - last[0]);
-                            last[0] = n;
-                        }
-                    }, ctx.err());
-                }
-            }
+            Path survey = prep.survey(store, a.seed, a.size, false);
             double genSeconds = DemoRun.secs(t0);
             List<TruthRow> truth = SurveyGenerator.readTruth(survey.resolve("truth.csv"));
             Map<String, TruthRow> byFibre = new HashMap<>();
@@ -133,7 +115,7 @@ public final class AccuracyCommand implements Command {
             try (var s = Files.list(survey)) {
                 files = s.filter(p -> p.getFileName().toString().endsWith(".fits")).sorted().toList();
             }
-            Measurer m = new Measurer(ctx, new Services(readers, inputs, estimators, templates));
+            Measurer m = new Measurer(ctx, services);
             Measurer.Result mock = m.measure(files, (f, i) -> byFibre.get(f + "#" + i), chosen, a.threads, truth.size(),
                     "measuring " + truth.size() + " mock spectra with " + chosen.size() + " estimator(s)");
             Measurer.Result real = null;
@@ -145,11 +127,12 @@ public final class AccuracyCommand implements Command {
             }
             Path partial = store.partial("results");
             AccuracyReport report = new AccuracyReport(a.seed, a.size, genSeconds, mock, real, realTruth);
-            report.write(partial);
+            String plotNote = report.write(partial);
             Path published = store.publish(partial, "results");
             report.printGoals(ctx.out());
             ctx.out().println();
-            ctx.out().println("full tables: " + published.resolve("accuracy.md") + " and accuracy.csv");
+            ctx.out().println("full tables: " + published.resolve("accuracy.md") + " and accuracy.csv"
+                    + (plotNote.isEmpty() ? "; plots success-vs-snr.png and grade-calibration.png" : "; " + plotNote));
             return mock.unavailable().isEmpty() ? 0 : 1;
         } catch (IOException e) {
             ctx.err().println("redward accuracy: " + e.getMessage());

@@ -94,7 +94,21 @@ final class AccuracyReport {
         return out;
     }
 
-    void write(Path dir) throws IOException {
+    /** Writes accuracy.md, accuracy.csv and, when the charts bundle is installed, the plots; returns what it could not write. */
+    String write(Path dir) throws IOException {
+        String plots = "";
+        try {
+            AccuracyPlots.write(dir, mock.rows());
+        } catch (NoClassDefFoundError e) {
+            plots = "plots not written: no charts bundle installed";
+        } catch (IOException | RuntimeException e) {
+            plots = "plots not written: " + e.getMessage();
+        }
+        writeTables(dir);
+        return plots;
+    }
+
+    private void writeTables(Path dir) throws IOException {
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(dir.resolve("accuracy.md")))) {
             w.printf(Locale.ROOT, "# Redshift accuracy benchmark%n%nMock survey: %d fibres of the invented Ember field (Quill "
                     + "spectrograph, resolving power about 2000), seed %d. Simulated spectra from physical recipes that share "

@@ -11,7 +11,11 @@ import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
+import org.redward.api.catalog.CatalogWriterRegistry;
+import org.redward.api.cosmology.CosmologyCalculator;
+import org.redward.api.cosmology.CosmologyRegistry;
 import org.redward.api.formats.SpectrumInputs;
+import org.redward.api.frames.FrameCorrector;
 import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
@@ -46,6 +50,14 @@ public final class DemoCommand implements Command {
     private TemplateRegistry templates;
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
     private volatile SpectrumInputs inputs;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile FrameCorrector frames;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyRegistry cosmologies;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyCalculator calculator;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CatalogWriterRegistry writers;
 
     @CommandLine.Command(name = "demo", mixinStandardHelpOptions = true, sortOptions = false,
             description = {"Run the whole job on a built-in invented survey (the Ember field seen by the invented Quill "
@@ -65,6 +77,8 @@ public final class DemoCommand implements Command {
         String estimator;
         @Option(names = "--fresh", description = "regenerate the survey even if a complete one exists")
         boolean fresh;
+        @Option(names = "--generate-only", description = "only generate the survey (Quill FITS files and truth.csv) and say where it is")
+        boolean generateOnly;
         @Option(names = "--threads", paramLabel = "N", description = "measuring threads (default: the number of cores)")
         int threads = Runtime.getRuntime().availableProcessors();
         @Option(names = "--json", description = "print the summary as one JSON object")
@@ -74,33 +88,25 @@ public final class DemoCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException("demo: " + e.getMessage());
-        }
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
-            return 0;
-        }
-        if (cl.isVersionHelpRequested()) {
-            ctx.out().println("demo survey generator version " + SurveyGenerator.VERSION);
+        if (!Cli.parse(a, arguments, "demo", ctx.out())) {
             return 0;
         }
         if (a.size < 1) {
-            throw new UsageException("demo: --size " + a.size + ": the survey needs at least 1 fibre");
+            throw new UsageException("--size " + a.size + ": the survey needs at least 1 fibre");
         }
         if (a.size > MAX_DEMO_SIZE) {
-            throw new UsageException("demo: --size " + a.size + " is more than the demo's limit of " + MAX_DEMO_SIZE
+            throw new UsageException("--size " + a.size + " is more than the demo's limit of " + MAX_DEMO_SIZE
                     + " fibres; for large mock surveys use 'redward accuracy --size N'");
         }
         if (a.threads < 1) {
-            throw new UsageException("demo: --threads " + a.threads + ": at least 1");
+            throw new UsageException("--threads " + a.threads + ": at least 1");
         }
         Path out = ctx.workingDirectory().resolve(a.out).normalize();
-        DemoRun run = new DemoRun(ctx, new Services(readers, inputs, estimators, templates));
+        DemoRun run = new DemoRun(ctx, new Services(readers, inputs, estimators, templates, frames, cosmologies, calculator, writers));
         try (SurveyStore store = SurveyStore.open(out)) {
+            if (a.generateOnly) {
+                return run.generateOnly(store, a.seed, a.size, a.fresh, a.json);
+            }
             return run.execute(store, a.seed, a.size, a.fresh, a.estimator, a.threads, a.json);
         } catch (IOException e) {
             ctx.err().println("redward demo: " + e.getMessage());

@@ -21,6 +21,9 @@ final class DemoReport {
     static final String SCENARIO = "the invented Ember field, observed with the invented Quill fibre spectrograph on the "
             + "Ossel 2.6m telescope at the invented Quenta Ridge Observatory";
 
+    /** Cautions printed on the terminal (all of them go into the report). */
+    static final int SHOWN_CAUTIONS = 8;
+
     private final long seed;
     private final int size;
     private final Path survey;
@@ -44,19 +47,23 @@ final class DemoReport {
     }
 
     private void addWarningsSummary() {
-        // group the estimators' warnings by their wording with the numbers taken out
+        // group the estimators' warnings by their wording up to the first colon, numbers taken out
         Map<String, Integer> counts = new TreeMap<>();
         Map<String, String> example = new TreeMap<>();
         for (Row r : rows) {
             for (String w : r.warnings) {
                 String key = w.replaceAll("[-+]?\\d+(\\.\\d+)?", "#");
+                int colon = key.indexOf(':');
+                key = colon > 0 ? key.substring(0, colon) : key;
                 counts.merge(key, 1, Integer::sum);
                 example.putIfAbsent(key, w);
             }
         }
-        for (Map.Entry<String, Integer> e : counts.entrySet()) {
+        List<Map.Entry<String, Integer>> kinds = new ArrayList<>(counts.entrySet());
+        kinds.sort((a, b) -> b.getValue() - a.getValue());
+        for (Map.Entry<String, Integer> e : kinds) {
             cautions.add(e.getValue() == 1 ? "1 spectrum: " + example.get(e.getKey())
-                    : e.getValue() + " spectra: " + example.get(e.getKey()) + " (and similar)");
+                    : e.getValue() + " spectra, e.g.: " + example.get(e.getKey()));
         }
     }
 
@@ -98,6 +105,15 @@ final class DemoReport {
             out.printf(Locale.ROOT, "  %-16s %6d   %s%n", e.getKey(), n, g.toString().trim());
         }
         out.println();
+        if (rows.stream().noneMatch(r -> r.measured)) {
+            out.println("  nothing was measured, so there is nothing to score against the truth (see the steps above)");
+        } else {
+            againstTruth(out);
+        }
+        printCautionsAndFiles(out, results, seconds);
+    }
+
+    private void againstTruth(PrintStream out) {
         out.println("  against the truth of the survey (success: |z - z_true|/(1+z_true) < 0.001; catastrophic: > 0.01)");
         out.printf(Locale.ROOT, "  %-14s %8s %9s %9s %13s %12s %15s%n", "true class", "objects", "measured", "success",
                 "catastrophic", "class right", "dv NMAD km/s");
@@ -110,11 +126,18 @@ final class DemoReport {
         int fdn = fd.values().stream().mapToInt(Integer::intValue).sum();
         out.printf(Locale.ROOT, "  %d fibres held no object (empty or broken); %d of them were given a redshift%s%n", empty, fdn,
                 fdn > 0 ? " " + fd : "");
+    }
+
+    private void printCautionsAndFiles(PrintStream out, Path results, double seconds) {
         if (!cautions.isEmpty()) {
             out.println();
             out.println("  cautions:");
-            for (String c : cautions) {
-                out.println("    - " + c);
+            int shown = Math.min(cautions.size(), SHOWN_CAUTIONS);
+            for (String c : cautions.subList(0, shown)) {
+                out.println("    - " + (c.length() > 200 ? c.substring(0, 197) + "..." : c));
+            }
+            if (cautions.size() > shown) {
+                out.println("    - and " + (cautions.size() - shown) + " more in report.md");
             }
         }
         out.println();

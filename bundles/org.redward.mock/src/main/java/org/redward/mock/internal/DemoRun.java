@@ -1,8 +1,6 @@
 package org.redward.mock.internal;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.io.PrintStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -12,26 +10,13 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.Semaphore;
 
 import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.Progress;
-import org.redward.api.formats.ReaderRegistry;
-import org.redward.api.formats.SpectrumReader;
-import org.redward.api.formats.SpectrumRecord;
-import org.redward.api.formats.SpectrumSource;
-import org.redward.api.redshift.EstimationContext;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.redshift.RedshiftEstimator;
-import org.redward.api.redshift.RedshiftSolution;
 import org.redward.api.registry.Provided;
-import org.redward.api.templates.TemplateRegistry;
-import org.redward.api.templates.TemplateSet;
-import org.redward.spectrum.Spectrum;
 
 /** One run of the demo: the steps in order, their status and timing, and the summary. Not thread-safe. */
 final class DemoRun {
@@ -61,28 +46,9 @@ final class DemoRun {
     int execute(SurveyStore store, long seed, int size, boolean fresh, String estimatorId, int threads, boolean json)
             throws IOException {
         long t0 = System.nanoTime();
-        PrintStream err = ctx.err();
-        for (String left : store.removeLeftovers()) {
-            err.println("redward demo: removed " + store.root().resolve(left) + ", left half-written by an interrupted run");
-        }
+        removeLeftovers(store);
         // 1. survey
-        long t = System.nanoTime();
-        Path survey = store.surveyFolder(seed, size);
-        if (!fresh && store.hasSurvey(seed, size)) {
-            steps.add(new Step("generate survey", "reused", size + " fibres in " + survey.getFileName(), secs(t)));
-        } else {
-            try (Progress p = ctx.progress("generating the invented survey", size)) {
-                long[] last = {0};
-                store.generate(seed, size, n -> {
-                    synchronized (last) {
-                        p.advance(n - last[0]);
-                        last[0] = n;
-                    }
-                }, err);
-            }
-            steps.add(new Step("generate survey", "done", size + " fibres, " + new SurveyGenerator(seed, size).files()
-                    + " Quill files", secs(t)));
-        }
+        Path survey = survey(store, seed, size, fresh);
         List<TruthRow> truth = SurveyGenerator.readTruth(survey.resolve("truth.csv"));
         Map<String, TruthRow> truthByFibre = new LinkedHashMap<>();
         for (TruthRow r : truth) {
@@ -93,9 +59,11 @@ final class DemoRun {
         Optional<Provided<RedshiftEstimator>> est = chooseEstimator(estimatorId);
         List<Row> rows = readAndMeasure(survey, truthByFibre, est, threads);
         // 4-7. frames, distances, catalogue, plots
-        steps.add(new Step("frame corrections", "not available", "no frame-correction service in this build", 0));
-        steps.add(new Step("distances", "not available", "no cosmology service in this build", 0));
-        steps.add(new Step("catalogue", "not available", "no catalogue writers in this build", 0));
+        DemoSteps more = new DemoSteps(cautions);
+        steps.add(more.frames(services.frames(), rows));
+        steps.add(more.distances(services.cosmologies(), services.calculator(), rows));
+        steps.add(more.catalogue(services.writers(), rows, results,
+                DemoSteps.provenance(seed, size, est.map(Provided::toString).orElse("none"))));
         steps.add(plots(results, rows));
         // 8. score and report
         Scorecard card = Scorecard.of(rows.stream().map(Row::outcome).toList());
@@ -112,6 +80,52 @@ final class DemoRun {
             ctx.out().println(report.json(published, total));
         } else {
             report.printSummary(ctx.out(), published, total);
+        }
+        return 0;
+    }
+
+    void removeLeftovers(SurveyStore store) throws IOException {
+        for (String left : store.removeLeftovers()) {
+            ctx.err().println("redward: removed " + store.root().resolve(left) + ", left half-written by an interrupted run");
+        }
+    }
+
+    /** The survey folder: reused when complete (and not {@code fresh}), generated otherwise. */
+    Path survey(SurveyStore store, long seed, int size, boolean fresh) throws IOException {
+        long t = System.nanoTime();
+        Path survey = store.surveyFolder(seed, size);
+        if (!fresh && store.hasSurvey(seed, size)) {
+            steps.add(new Step("generate survey", "reused", size + " fibres in " + survey.getFileName(), secs(t)));
+            return survey;
+        }
+        try (Progress p = ctx.progress("generating the invented survey", size)) {
+            long[] last = {0};
+            store.generate(seed, size, n -> {
+                synchronized (last) {
+                    p.advance(n - last[0]);
+                    last[0] = n;
+                }
+            }, ctx.err());
+        }
+        int files = new SurveyGenerator(seed, size).files();
+        steps.add(new Step("generate survey", "done", size + " fibres, " + files + " Quill file" + (files == 1 ? "" : "s"), secs(t)));
+        return survey;
+    }
+
+    /** {@code demo --generate-only}: the survey and where it is. */
+    int generateOnly(SurveyStore store, long seed, int size, boolean fresh, boolean json) throws IOException {
+        removeLeftovers(store);
+        Path survey = survey(store, seed, size, fresh);
+        Step s = steps.get(steps.size() - 1);
+        int files = new SurveyGenerator(seed, size).files();
+        if (json) {
+            ctx.out().println(Json.object().put("survey", survey.toString()).put("seed", seed).put("size", size)
+                    .put("status", s.status()).put("files", files).put("truth", survey.resolve("truth.csv").toString())
+                    .put("seconds", s.seconds()));
+        } else {
+            ctx.out().printf(Locale.ROOT, "%s the invented survey: %d fibres in %d Quill file%s, seed %d (%.1f s)%n",
+                    s.status().equals("reused") ? "reused" : "generated", size, files, files == 1 ? "" : "s", seed, s.seconds());
+            ctx.out().println("  files and truth.csv: " + survey);
         }
         return 0;
     }
@@ -159,8 +173,18 @@ final class DemoRun {
 
     private Step plots(Path folder, List<Row> rows) {
         long t = System.nanoTime();
+        java.util.function.DoubleUnaryOperator dl = null;
+        double dh = Double.NaN;
+        if (services.cosmologies() != null && services.calculator() != null) {
+            var set = services.cosmologies().find(DemoSteps.COSMOLOGY);
+            if (set.isPresent()) {
+                var cosmo = services.calculator().of(set.get().service().parameters());
+                dl = cosmo::luminosityDistanceMpc;
+                dh = cosmo.hubbleDistanceMpc();
+            }
+        }
         try {
-            List<String> files = DemoPlots.write(folder, rows, null, Double.NaN);
+            List<String> files = DemoPlots.write(folder, rows, dl, dh);
             return new Step("plots", "done", String.join(", ", files) + (files.contains("hubble-diagram.png") ? ""
                     : "; no Hubble diagram without distances"), secs(t));
         } catch (NoClassDefFoundError e) {

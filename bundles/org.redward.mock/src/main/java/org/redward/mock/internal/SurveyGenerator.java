@@ -24,7 +24,7 @@ import java.util.stream.IntStream;
 public final class SurveyGenerator {
 
     /** Version of the generator's recipes; recorded in the files and the manifest. */
-    public static final String VERSION = "1";
+    public static final String VERSION = "2";
     /** Largest survey the generator accepts. */
     public static final int MAX_SIZE = 200_000;
 
