@@ -21,6 +21,9 @@ import org.redward.api.formats.SpectrumReadException;
 import org.redward.api.formats.SpectrumReader;
 import org.redward.api.formats.SpectrumRecord;
 import org.redward.api.formats.SpectrumSource;
+import org.redward.api.lines.FinderSettings;
+import org.redward.api.lines.LineFinder;
+import org.redward.api.lines.LineListRegistry;
 import org.redward.api.redshift.EstimationContext;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.redshift.RedshiftEstimator;
@@ -47,9 +50,16 @@ final class OsgiBackend implements Backend {
     private final List<ProviderRegistry<?>> registries;
     private final String user;
     private final String templateSet;
+    private final java.util.function.Supplier<LineListRegistry> lineLists;
+    private final java.util.function.Supplier<LineFinder> finder;
+    private final String lineListId;
 
     OsgiBackend(BundleContext context, ReaderRegistry readers, EstimatorRegistry estimators, TemplateRegistry templates,
-            PlatformInfo platform, List<ProviderRegistry<?>> registries, String user, String templateSet) {
+            PlatformInfo platform, List<ProviderRegistry<?>> registries, String user, String templateSet,
+            java.util.function.Supplier<LineListRegistry> lineLists, java.util.function.Supplier<LineFinder> finder, String lineListId) {
+        this.lineLists = lineLists;
+        this.finder = finder;
+        this.lineListId = lineListId;
         this.context = context;
         this.readers = readers;
         this.estimators = estimators;
@@ -149,7 +159,8 @@ final class OsgiBackend implements Backend {
                     if (!r.ok()) {
                         throw new IOException(r.error());
                     }
-                    return new Loaded(r.spectrum().orElseThrow(), null, src.layout());
+                    Spectrum s = r.spectrum().orElseThrow();
+                    return new Loaded(s, null, src.layout(), findLines(s));
                 }
             }
         }
@@ -183,14 +194,29 @@ final class OsgiBackend implements Backend {
         }
     }
 
+    /** The lines of the chosen list (default: the standard one); empty when no list is installed. */
     @Override
     public List<RestLine> lines() {
-        return DisplayLines.FALLBACK;
+        LineListRegistry r = lineLists.get();
+        if (r == null) {
+            return List.of();
+        }
+        String id = lineListId == null || lineListId.isEmpty() ? LineListRegistry.STANDARD : lineListId;
+        return r.find(id).or(() -> r.providers().stream().findFirst()).map(p -> LineViews.restLines(p.service())).orElse(List.of());
     }
 
+    /** Lines found by the installed line finder with its default settings; empty when none is installed. */
     @Override
     public List<FoundLine> findLines(Spectrum spectrum) {
-        return List.of();
+        LineFinder f = finder.get();
+        if (f == null) {
+            return List.of();
+        }
+        try {
+            return LineViews.found(f.find(spectrum, FinderSettings.defaults()));
+        } catch (RuntimeException e) {
+            return List.of();
+        }
     }
 
     @Override
