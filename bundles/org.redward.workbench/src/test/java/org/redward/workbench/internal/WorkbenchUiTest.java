@@ -27,6 +27,7 @@ import org.redward.lines.internal.LineListFile;
 import org.redward.lines.internal.MatchedFilterFinder;
 import org.redward.lines.internal.PairVoteIdentifier;
 import org.redward.spectrum.Spectrum;
+import org.redward.testkit.HeadlessDisplay;
 import org.redward.testkit.SharedData;
 
 /**
