@@ -481,6 +481,9 @@ final class WorkbenchWindow {
         QueueItem it = queue.current();
         shown = it;
         pickedAngstrom = Double.NaN;
+        if (queue.cursor() >= 0 && queueTable.getSelectionIndex() != queue.cursor()) {
+            queueTable.setSelection(queue.cursor());
+        }
         if (it == null) {
             headline.setText("Nothing in the queue" + (queue.all().isEmpty() ? "" : " passes the filter"));
             spectrumCanvas.setChart(null, "Add spectra with the button above or name files on the command line.");
