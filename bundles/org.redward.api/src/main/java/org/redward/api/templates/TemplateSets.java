@@ -28,6 +28,45 @@ public final class TemplateSets {
     private TemplateSets() {
     }
 
+    /**
+     * The contiguity rule every template follows: no wavelength step may exceed this many times
+     * the median step (scaled by wavelength, so that log-sampled templates pass).
+     */
+    public static final double MAX_STEP_RATIO = 5.0;
+
+    /**
+     * Index {@code i} of the first gap, between {@code w[i]} and {@code w[i+1]}, by the
+     * contiguity rule ({@link #MAX_STEP_RATIO}); -1 when there is none. The step at pixel i is
+     * compared with {@code median_step * max(1, w[i] / w[middle])}.
+     *
+     * @param restVacuumAngstrom strictly increasing wavelengths (at least 2)
+     */
+    public static int firstGap(double[] restVacuumAngstrom) {
+        double[] w = restVacuumAngstrom;
+        double[] steps = new double[w.length - 1];
+        for (int i = 1; i < w.length; i++) {
+            steps[i - 1] = w[i] - w[i - 1];
+        }
+        double median = medianStep(w);
+        for (int i = 0; i < steps.length; i++) {
+            double local = median * Math.max(1.0, w[i] / w[steps.length / 2]);
+            if (steps[i] > MAX_STEP_RATIO * local) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /** The median wavelength step (Angstrom) of strictly increasing wavelengths (at least 2). */
+    public static double medianStep(double[] restVacuumAngstrom) {
+        double[] steps = new double[restVacuumAngstrom.length - 1];
+        for (int i = 1; i < restVacuumAngstrom.length; i++) {
+            steps[i - 1] = restVacuumAngstrom[i] - restVacuumAngstrom[i - 1];
+        }
+        java.util.Arrays.sort(steps);
+        return steps[steps.length / 2];
+    }
+
     /** SHA-256 of the templates by the rule above (lower-case hex). */
     public static String checksum(List<Template> templates) {
         MessageDigest md;

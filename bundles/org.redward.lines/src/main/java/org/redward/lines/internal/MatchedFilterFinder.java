@@ -25,9 +25,9 @@ import org.redward.spectrum.Spectrum;
  * <pre>A_i = sum_j r_{i+j} v_{i+j} g_j / sum_j v_{i+j} g_j^2,   S/N_i = sum_j r_{i+j} v_{i+j} g_j / sqrt(sum_j v_{i+j} g_j^2).</pre>
  * Kernels run from 2 to about 70 pixels FWHM (limited by the widest line allowed); a feature is a
  * candidate where |S/N| reaches the threshold and is a maximum both along the spectrum and across
- * kernel widths. After the first round of fits, the detection is run once more on what the fits
- * leave, so that lines hidden in a blend (e.g. [N II] beside H-alpha) are found and the blend
- * refitted with them.
+ * kernel widths. After the first round of fits, the detection is run again (up to three times) on
+ * what the fits leave, so that lines hidden in a blend (e.g. [N II] beside H-alpha) are found and
+ * the blend refitted with them.
  *
  * <p>Noise. When the file has errors, they are inflated (never deflated) by the robust scatter of
  * the normalised residuals about the continuum; when it has none, the noise is that scatter.
@@ -47,6 +47,8 @@ public final class MatchedFilterFinder implements LineFinder {
     static final int MIN_PIXELS = 12;
     /** At most this many lines are fitted (the strongest detections). */
     static final int MAX_LINES = 40;
+    /** Detection rounds on what the fits leave, after the first. */
+    static final int EXTRA_ROUNDS = 3;
     /** A fitted line is kept if its flux S/N reaches this fraction of the detection threshold. */
     static final double KEEP_FRACTION = 0.6;
 
@@ -115,14 +117,16 @@ public final class MatchedFilterFinder implements LineFinder {
 
         Fitter fitter = new Fitter(w, r, v, c, pixelKms, settings);
         List<Fitter.Line> lines = fitter.fitAll(detect(r, v, settings, maxFwhmPx, List.of()));
-        double[] left = fitter.residual(lines);
-        List<Candidate> more = detect(left, v, settings, maxFwhmPx, lines);
-        if (!more.isEmpty()) {
+        for (int round = 0; round < EXTRA_ROUNDS && !lines.isEmpty() && lines.size() < MAX_LINES; round++) {
+            List<Candidate> more = detect(fitter.residual(lines), v, settings, maxFwhmPx, lines);
+            if (more.isEmpty()) {
+                break;
+            }
             List<Candidate> all = new ArrayList<>();
             for (Fitter.Line l : lines) {
                 all.add(l.asCandidate());
             }
-            all.addAll(more);
+            all.addAll(more.subList(0, Math.min(more.size(), MAX_LINES - lines.size())));
             lines = fitter.fitAll(all);
         }
         List<DetectedLine> out = fitter.measure(lines, settings.snrThreshold() * KEEP_FRACTION);
@@ -217,13 +221,18 @@ public final class MatchedFilterFinder implements LineFinder {
         for (Candidate cd : found) {
             boolean clash = false;
             for (Candidate o : kept) {
-                if (o.sign() == cd.sign() && Math.abs(o.pixel() - cd.pixel()) < 0.5 * (o.fwhmPixels() + cd.fwhmPixels())) {
+                // a weaker feature of either sign inside a stronger one is the same feature's wing
+                if (Math.abs(o.pixel() - cd.pixel()) < 0.5 * (o.fwhmPixels() + cd.fwhmPixels())) {
                     clash = true;
                     break;
                 }
             }
             for (Fitter.Line l : known) {
-                if (l.sign() == cd.sign() && Math.abs(l.pixel() - cd.pixel()) < 0.5 * Math.max(l.fwhmPixels(), cd.fwhmPixels())) {
+                double gap = Math.abs(l.pixel() - cd.pixel());
+                // what a fitted line leaves: same sign within half its FWHM is the line itself;
+                // opposite sign within its width is a mismatch of its profile, not a new line
+                if ((l.sign() == cd.sign() && gap < 0.5 * l.fwhmPixels())
+                        || (l.sign() != cd.sign() && gap < Math.max(l.fwhmPixels(), cd.fwhmPixels()))) {
                     clash = true;
                     break;
                 }

@@ -28,7 +28,8 @@ import org.redward.api.registry.Provided;
  * each single identity, is then tested against all detected lines at once: every line is matched
  * to its nearest identity within tolerance (each list line used once), z is refined as the
  * weighted mean of the matches, and the hypothesis is scored:
- * <pre>score = sum over matches of weight(line) * k * ln(1 + S/N) - sum over strong lines missed of 0.3 * weight * ln(1 + S/N_max)</pre>
+ * <pre>score = P - min(M, P / 2),  P = sum over matches of weight(line) * k * ln(1 + S/N),
+ * M = sum over strong lines (or doublets) missed of 0.3 * weight * ln(1 + S/N_max)</pre>
  * where k = 0.3 when a broad detected line (FWHM &gt; 2000 km/s) is matched to a line that is never
  * broad, and 1 otherwise; "strong lines missed" are lines of weight &gt;= 0.8, of a kind already
  * matched, predicted inside the observed range but not found. Hypotheses that explain two or
@@ -136,6 +137,10 @@ public final class PairVoteIdentifier implements LineIdentifier {
                     RedshiftHypothesis r2 = ranked.get(1);
                     warnings.add(String.format(Locale.ROOT, "another redshift explains the lines almost as well: z = %.5f (%d lines, score %.1f against %.1f)",
                             r2.z(), r2.matchedCount(), r2.score(), best.score()));
+                }
+                if (best.matchedCount() == 2) {
+                    warnings.add(String.format(Locale.ROOT, "the redshift rests on two lines only (%s and %s): check it by eye",
+                            best.matches().get(0).line().name(), best.matches().get(1).line().name()));
                 }
                 int unexplained = lines.size() - best.matchedCount();
                 if (unexplained > best.matchedCount()) {
@@ -414,7 +419,9 @@ public final class PairVoteIdentifier implements LineIdentifier {
                 }
             }
             List<SpectralLine> missing = new ArrayList<>();
+            double penalty = 0;
             if (Double.isFinite(lo) && Double.isFinite(hi)) {
+                java.util.Set<String> groupsCounted = new java.util.HashSet<>();
                 for (int j = 0; j < all.size(); j++) {
                     SpectralLine l = all.get(j);
                     if (matchedLine[j] || l.weight() < 0.8) {
@@ -425,16 +432,18 @@ public final class PairVoteIdentifier implements LineIdentifier {
                         continue;
                     }
                     double ref = l.kind() == LineKind.ABSORPTION ? maxAb : l.kind() == LineKind.EMISSION ? maxEm : Math.max(maxEm, maxAb);
-                    if (ref > 0) {
-                        // a doublet member counts as found when its partner was matched
-                        if (l.grouped() && partnerMatched(l, matchedLine)) {
-                            continue;
-                        }
-                        missing.add(l);
-                        score -= 0.3 * l.weight() * Math.log1p(ref);
+                    // a doublet member counts as found when its partner was matched
+                    if (ref <= 0 || (l.grouped() && partnerMatched(l, matchedLine))) {
+                        continue;
+                    }
+                    missing.add(l);
+                    if (!l.grouped() || groupsCounted.add(l.group())) {
+                        penalty += 0.3 * l.weight() * Math.log1p(ref);
                     }
                 }
             }
+            // missing lines can demote a hypothesis, never outweigh what it explains
+            score -= Math.min(penalty, 0.5 * score);
             return new RedshiftHypothesis(z, zErr, score, ms, missing);
         }
 

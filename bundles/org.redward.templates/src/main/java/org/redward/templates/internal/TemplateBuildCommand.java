@@ -70,14 +70,14 @@ final class TemplateBuildCommand {
         try {
             cl.parseArgs(arguments.toArray(new String[0]));
         } catch (CommandLine.ParameterException e) {
-            throw new UsageException("templates build: " + e.getMessage());
+            throw new UsageException("build: " + e.getMessage());
         }
         if (cl.isUsageHelpRequested()) {
             cl.usage(ctx.out());
             return 0;
         }
         if (a.components < 1 || !(a.step > 0) || !(a.coverage > 0 && a.coverage <= 1)) {
-            throw new UsageException("templates build: --components must be >= 1, --step > 0, --coverage in (0, 1]");
+            throw new UsageException("build: --components must be >= 1, --step > 0, --coverage in (0, 1]");
         }
         if (readers == null || readers.providers().isEmpty()) {
             ctx.err().println("redward templates build: no spectrum readers are installed, so the spectra cannot be read");
@@ -91,7 +91,7 @@ final class TemplateBuildCommand {
         for (Path p : a.spectra) {
             Path f = ctx.workingDirectory().resolve(p);
             if (!Files.isRegularFile(f)) {
-                throw new UsageException("templates build: no such file: " + f);
+                throw new UsageException("build: no such file: " + f);
             }
             SpectrumReader reader = choose(readers, f);
             if (reader == null) {
@@ -129,7 +129,7 @@ final class TemplateBuildCommand {
         try {
             w = new TemplateBundleWriter(a.id, a.version, "eigen-templates built by PCA from " + count(byClass) + " spectra of known redshift");
         } catch (IllegalArgumentException e) {
-            throw new UsageException("templates build: --version: " + e.getMessage());
+            throw new UsageException("build: --version: " + e.getMessage());
         }
         List<String> notes = new ArrayList<>();
         for (Map.Entry<ObjectClass, List<EigenTemplates.Input>> e : byClass.entrySet()) {
@@ -156,11 +156,8 @@ final class TemplateBuildCommand {
             return 1;
         }
         Path out = ctx.workingDirectory().resolve(a.out);
-        TemplateSetLoader.Loaded loaded;
-        try {
-            loaded = w.write(out);
-        } catch (TemplateDataException e) {
-            ctx.err().println("redward templates build: " + e.getMessage());
+        TemplateSetLoader.Loaded loaded = TemplatesCommand.write(ctx, "build", w, out);
+        if (loaded == null) {
             return 1;
         }
         List<String> all = new ArrayList<>(notes);
@@ -212,7 +209,7 @@ final class TemplateBuildCommand {
     /** Reads the redshift table; the message of any problem names the file and line. */
     static Map<String, Known> readTable(Path table) throws IOException {
         if (!Files.isRegularFile(table)) {
-            throw new UsageException("templates build: --redshifts: no such file: " + table);
+            throw new UsageException("build: --redshifts: no such file: " + table);
         }
         Map<String, Known> out = new HashMap<>();
         String[] header = null;
@@ -230,13 +227,13 @@ final class TemplateBuildCommand {
                     header[i] = header[i].toLowerCase(Locale.ROOT);
                 }
                 if (col(header, "file") < 0 || col(header, "z") < 0 || col(header, "class") < 0) {
-                    throw new UsageException("templates build: " + table + ", line " + lineNo
+                    throw new UsageException("build: " + table + ", line " + lineNo
                             + ": the header must name the columns file, z and class (and optionally index)");
                 }
                 continue;
             }
             if (parts.length < header.length) {
-                throw new UsageException("templates build: " + table + ", line " + lineNo + ": " + parts.length
+                throw new UsageException("build: " + table + ", line " + lineNo + ": " + parts.length
                         + " columns, the header has " + header.length);
             }
             String file = Path.of(parts[col(header, "file")]).getFileName().toString();
@@ -248,17 +245,17 @@ final class TemplateBuildCommand {
                 }
                 z = Double.parseDouble(parts[col(header, "z")]);
             } catch (NumberFormatException e) {
-                throw new UsageException("templates build: " + table + ", line " + lineNo + ": not a number (" + e.getMessage() + ")");
+                throw new UsageException("build: " + table + ", line " + lineNo + ": not a number (" + e.getMessage() + ")");
             }
             ObjectClass c = ObjectClass.parse(parts[col(header, "class")]);
             if (c == ObjectClass.UNKNOWN) {
-                throw new UsageException("templates build: " + table + ", line " + lineNo + ": class '"
+                throw new UsageException("build: " + table + ", line " + lineNo + ": class '"
                         + parts[col(header, "class")] + "' is not galaxy, quasar or star");
             }
             out.put(key(file, index), new Known(file, index, z, c));
         }
         if (out.isEmpty()) {
-            throw new UsageException("templates build: " + table + " lists no spectra");
+            throw new UsageException("build: " + table + " lists no spectra");
         }
         return out;
     }

@@ -40,6 +40,7 @@ public final class TemplateBundleWriter {
     private final String description;
     private final Map<String, byte[]> files = new LinkedHashMap<>();
     private final Map<String, Map<String, String>> templates = new LinkedHashMap<>();
+    private String handWritten;
 
     public TemplateBundleWriter(String id, String version, String description) {
         this.id = id;
@@ -80,6 +81,16 @@ public final class TemplateBundleWriter {
         templates.put(name, t);
     }
 
+    /**
+     * Uses a hand-written descriptor instead of one made from {@link #add} calls; its files are
+     * stored under {@code templates/} at the relative paths it names.
+     */
+    public void useDescriptor(String text, Map<String, byte[]> filesByRelativePath) {
+        handWritten = text;
+        files.clear();
+        files.putAll(filesByRelativePath);
+    }
+
     /** The bundle symbolic name used for a set id. */
     public static String symbolicName(String id) {
         return "redward.templates." + id.replaceAll("[^A-Za-z0-9._-]", "_");
@@ -101,7 +112,7 @@ public final class TemplateBundleWriter {
      */
     public TemplateSetLoader.Loaded write(Path out) throws TemplateDataException, IOException {
         String descriptorPath = FOLDER + id + ".properties";
-        byte[] descriptor = descriptor().getBytes(StandardCharsets.UTF_8);
+        byte[] descriptor = (handWritten != null ? handWritten : descriptor()).getBytes(StandardCharsets.UTF_8);
         TemplateSetLoader.Loaded loaded = TemplateSetLoader.load("set " + id, descriptorPath,
                 p -> p.equals(descriptorPath) ? descriptor : p.startsWith(FOLDER) ? files.get(p.substring(FOLDER.length())) : null);
         Manifest mf = new Manifest();
@@ -114,6 +125,8 @@ public final class TemplateBundleWriter {
         a.putValue("Bundle-Description", oneLine(description));
         a.putValue("Redward-Template-Checksum", loaded.set().checksum());
         a.putValue(TemplateSet.BUNDLE_HEADER, descriptorPath);
+        // a data bundle is useless without the extender: say so, so that the framework can tell
+        a.putValue("Require-Capability", "osgi.extender;filter:=\"(&(osgi.extender=redward.templates)(version>=1.0)(!(version>=2.0)))\"");
         Path parent = out.toAbsolutePath().getParent();
         if (parent != null) {
             Files.createDirectories(parent);

@@ -86,14 +86,14 @@ public final class TemplateExtender {
     /** The sets registered now, by bundle id order. */
     public List<Registered> registered() {
         List<Registered> out = new ArrayList<>();
-        byBundle.keySet().stream().sorted().forEach(id -> out.addAll(byBundle.get(id).sets()));
+        new java.util.TreeMap<>(byBundle).values().forEach(t -> out.addAll(t.sets()));
         return out;
     }
 
     /** The sets that could not be loaded, with their reasons. */
     public List<Problem> problems() {
         List<Problem> out = new ArrayList<>();
-        byBundle.keySet().stream().sorted().forEach(id -> out.addAll(byBundle.get(id).problems()));
+        new java.util.TreeMap<>(byBundle).values().forEach(t -> out.addAll(t.problems()));
         return out;
     }
 

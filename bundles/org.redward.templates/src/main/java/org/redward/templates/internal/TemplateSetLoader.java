@@ -25,8 +25,6 @@ import org.redward.spectrum.ObjectClass;
  */
 public final class TemplateSetLoader {
 
-    /** A wavelength step more than this many times the median step is a gap. */
-    static final double GAP_FACTOR = 5.0;
     /** Fewest pixels a usable template keeps after trimming. */
     static final int MIN_PIXELS = 10;
     /** Plausible rest wavelengths (Angstrom) of an optical/UV/IR template; outside: wrong unit. */
@@ -228,6 +226,16 @@ public final class TemplateSetLoader {
         if (allZero) {
             throw new TemplateDataException(where + ": the flux is zero everywhere");
         }
+        if (!zeroBad) {
+            int zeros = 0;
+            for (double v : f) {
+                zeros += v == 0 ? 1 : 0;
+            }
+            if (zeros > 0) {
+                notes.add(where + ": " + zeros + " interior pixels have flux exactly 0 and are kept as data;"
+                        + " if they are masked pixels, declare zero-is-bad (templates pack --zero-is-bad --bad-pixels interpolate)");
+            }
+        }
         if (bad > 0) {
             if (badPolicy.equals("reject")) {
                 throw new TemplateDataException(String.format(Locale.ROOT,
@@ -300,21 +308,11 @@ public final class TemplateSetLoader {
     }
 
     private static void checkGaps(String where, double[] w) throws TemplateDataException {
-        double[] steps = new double[w.length - 1];
-        for (int i = 1; i < w.length; i++) {
-            steps[i - 1] = w[i] - w[i - 1];
-        }
-        double[] sorted = steps.clone();
-        Arrays.sort(sorted);
-        double median = sorted[sorted.length / 2];
-        for (int i = 0; i < steps.length; i++) {
-            // relative steps, so that log-sampled templates are not flagged at their red end
-            double local = median * Math.max(1.0, w[i] / w[steps.length / 2]);
-            if (steps[i] > GAP_FACTOR * local) {
-                throw new TemplateDataException(String.format(Locale.ROOT,
-                        "%s: gap in the wavelengths from %.2f to %.2f Angstrom (step %.3g, typical %.3g); a template must be contiguous",
-                        where, w[i], w[i + 1], steps[i], median));
-            }
+        int i = TemplateSets.firstGap(w);
+        if (i >= 0) {
+            throw new TemplateDataException(String.format(Locale.ROOT,
+                    "%s: gap in the wavelengths from %.2f to %.2f Angstrom (step %.3g, typical %.3g); a template must be contiguous",
+                    where, w[i], w[i + 1], w[i + 1] - w[i], TemplateSets.medianStep(w)));
         }
     }
 

@@ -63,19 +63,22 @@ public final class TemplatesCommand implements Command {
             description = {"Write a data-only template-set bundle from template files (FITS table, FITS 1D image or text columns).",
                 "Options given once apply to every file; given once per file (or as a comma-separated list), they apply in file order."})
     static final class Pack {
-        @Parameters(arity = "1..*", paramLabel = "FILES", description = "template files: rest-frame spectra")
+        @Parameters(arity = "0..*", paramLabel = "FILES", description = "template files: rest-frame spectra")
         List<Path> files;
-        @Option(names = "--id", required = true, description = "the set's id (letters, digits, '.', '_', '-'), used with --templates")
+        @Option(names = "--descriptor", paramLabel = "FILE", description = {"a hand-written descriptor (properties: id, version, templates, and per template file, class, medium...; see the contributor guide)",
+            "instead of FILES and the per-file options; its files are read relative to it"})
+        Path descriptor;
+        @Option(names = "--id", description = "the set's id (letters, digits, '.', '_', '-'), used with --templates")
         String id;
         @Option(names = "--version", defaultValue = "1.0.0", description = "the set's version (OSGi form, default ${DEFAULT-VALUE})")
         String version;
         @Option(names = "--description", description = "where the templates come from (cite the paper)")
         String description;
-        @Option(names = "--class", required = true, split = ",", description = "galaxy, quasar or star: once for all files or once per file")
+        @Option(names = "--class", split = ",", description = "galaxy, quasar or star: once for all files or once per file")
         List<String> classes;
         @Option(names = "--subclass", split = ",", description = "subclass per file (default: the file's name)")
         List<String> subclasses;
-        @Option(names = "--medium", required = true, split = ",", description = "air or vacuum: the medium of the files' wavelengths (air is converted to vacuum)")
+        @Option(names = "--medium", split = ",", description = "air or vacuum: the medium of the files' wavelengths (air is converted to vacuum)")
         List<String> media;
         @Option(names = "--unit", split = ",", description = "angstrom, nm, um or log10-angstrom (default: the file's own unit, else angstrom)")
         List<String> units;
@@ -112,7 +115,7 @@ public final class TemplatesCommand implements Command {
             case "list":
                 return list(ctx, rest);
             default:
-                throw new UsageException("templates: unknown action '" + arguments.get(0) + "' (pack, build, list)");
+                throw new UsageException("unknown action '" + arguments.get(0) + "' (pack, build, list)");
         }
     }
 
@@ -121,7 +124,7 @@ public final class TemplatesCommand implements Command {
         try {
             cl.parseArgs(arguments.toArray(new String[0]));
         } catch (CommandLine.ParameterException e) {
-            throw new UsageException("templates " + cl.getCommandName() + ": " + e.getMessage());
+            throw new UsageException(cl.getCommandName() + ": " + e.getMessage());
         }
         if (cl.isUsageHelpRequested()) {
             cl.usage(ctx.out());
@@ -139,7 +142,7 @@ public final class TemplatesCommand implements Command {
             return values.get(0).trim();
         }
         if (values.size() != files) {
-            throw new UsageException("templates pack: " + option + " given " + values.size() + " times for " + files
+            throw new UsageException("pack: " + option + " given " + values.size() + " times for " + files
                     + " files (give it once for all, or once per file)");
         }
         return values.get(i).trim();
@@ -150,29 +153,35 @@ public final class TemplatesCommand implements Command {
         if (a == null) {
             return 0;
         }
+        if (a.descriptor != null) {
+            return packDescriptor(ctx, a);
+        }
+        if (a.files == null || a.files.isEmpty() || a.id == null || a.classes == null || a.media == null) {
+            throw new UsageException("pack: give FILES with --id, --class and --medium, or a --descriptor");
+        }
         int n = a.files.size();
         String description = a.description != null ? a.description : "template set " + a.id + " packed from " + n + " files";
         TemplateBundleWriter w;
         try {
             w = new TemplateBundleWriter(a.id, a.version, description);
         } catch (IllegalArgumentException e) {
-            throw new UsageException("templates pack: --version: " + e.getMessage());
+            throw new UsageException("pack: --version: " + e.getMessage());
         }
         if (a.badPixels != null && !a.badPixels.equals("reject") && !a.badPixels.equals("interpolate")) {
-            throw new UsageException("templates pack: --bad-pixels must be reject or interpolate, not '" + a.badPixels + "'");
+            throw new UsageException("pack: --bad-pixels must be reject or interpolate, not '" + a.badPixels + "'");
         }
         for (int i = 0; i < n; i++) {
             Path f = ctx.workingDirectory().resolve(a.files.get(i));
             if (!Files.isRegularFile(f)) {
-                throw new UsageException("templates pack: no such file: " + f);
+                throw new UsageException("pack: no such file: " + f);
             }
             String cls = perFile(a.classes, i, n, "--class");
             if (ObjectClass.parse(cls) == ObjectClass.UNKNOWN) {
-                throw new UsageException("templates pack: --class '" + cls + "' must be galaxy, quasar or star");
+                throw new UsageException("pack: --class '" + cls + "' must be galaxy, quasar or star");
             }
             String medium = perFile(a.media, i, n, "--medium").toLowerCase(Locale.ROOT);
             if (!medium.equals("air") && !medium.equals("vacuum")) {
-                throw new UsageException("templates pack: --medium '" + medium + "' must be air or vacuum");
+                throw new UsageException("pack: --medium '" + medium + "' must be air or vacuum");
             }
             Map<String, String> keys = new LinkedHashMap<>();
             keys.put(Descriptor.CLASS, ObjectClass.parse(cls).key());
@@ -189,15 +198,75 @@ public final class TemplatesCommand implements Command {
             w.add(name, f.getFileName().toString(), Files.readAllBytes(f), keys);
         }
         Path out = ctx.workingDirectory().resolve(a.out);
-        TemplateSetLoader.Loaded loaded;
-        try {
-            loaded = w.write(out);
-        } catch (TemplateDataException e) {
-            ctx.err().println("redward templates pack: " + e.getMessage());
+        TemplateSetLoader.Loaded loaded = write(ctx, "pack", w, out);
+        if (loaded == null) {
             return 1;
         }
         report(ctx, a.json, loaded, out, TemplateBundleWriter.symbolicName(a.id));
         return 0;
+    }
+
+    private int packDescriptor(CommandContext ctx, Pack a) throws IOException {
+        if (a.files != null && !a.files.isEmpty() || a.classes != null || a.media != null || a.subclasses != null
+                || a.units != null || a.trust != null || a.badPixels != null || a.zeroIsBad) {
+            throw new UsageException("pack: with --descriptor, the files and their keys come from the descriptor; leave out FILES and the per-file options");
+        }
+        Path file = ctx.workingDirectory().resolve(a.descriptor);
+        if (!Files.isRegularFile(file)) {
+            throw new UsageException("pack: --descriptor: no such file: " + file);
+        }
+        String text = Files.readString(file, java.nio.charset.StandardCharsets.UTF_8);
+        Descriptor d;
+        String id;
+        String version;
+        Map<String, byte[]> files = new LinkedHashMap<>();
+        try {
+            d = Descriptor.parse(file.toString(), text.getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            id = d.required(Descriptor.ID);
+            version = d.optional(Descriptor.VERSION, "1.0.0");
+            for (String name : d.templateNames()) {
+                String rel = d.requiredOf(name, Descriptor.FILE).replace('\\', '/');
+                if (rel.startsWith("/") || rel.contains("../") || rel.startsWith("..")) {
+                    throw new TemplateDataException("descriptor " + file + ": template '" + name + "': file " + rel
+                            + " must be a path below the descriptor's folder");
+                }
+                Path f = file.toAbsolutePath().getParent().resolve(rel);
+                if (!Files.isRegularFile(f)) {
+                    throw new TemplateDataException("descriptor " + file + ": template '" + name + "': no such file: " + f);
+                }
+                files.put(rel, Files.readAllBytes(f));
+            }
+        } catch (TemplateDataException e) {
+            ctx.err().println("redward templates pack: " + e.getMessage());
+            return 1;
+        }
+        if (a.id != null && !a.id.equals(id)) {
+            throw new UsageException("pack: --id " + a.id + " differs from the descriptor's id " + id);
+        }
+        TemplateBundleWriter w;
+        try {
+            w = new TemplateBundleWriter(id, version, d.optional(Descriptor.DESCRIPTION, "template set " + id));
+        } catch (IllegalArgumentException e) {
+            throw new UsageException("pack: descriptor version: " + e.getMessage());
+        }
+        w.useDescriptor(text, files);
+        Path out = ctx.workingDirectory().resolve(a.out);
+        TemplateSetLoader.Loaded loaded = write(ctx, "pack", w, out);
+        if (loaded == null) {
+            return 1;
+        }
+        report(ctx, a.json, loaded, out, TemplateBundleWriter.symbolicName(id));
+        return 0;
+    }
+
+    /** Writes the bundle; on refusal prints one line naming the file and returns null. */
+    static TemplateSetLoader.Loaded write(CommandContext ctx, String action, TemplateBundleWriter w, Path out) throws IOException {
+        try {
+            return w.write(out);
+        } catch (TemplateDataException e) {
+            ctx.err().println("redward templates " + action + ": " + e.getMessage());
+            return null;
+        }
     }
 
     /** Prints what was written (shared by pack and build). */
@@ -209,7 +278,7 @@ public final class TemplatesCommand implements Command {
         }
         PrintStream o = ctx.out();
         o.println("wrote " + out + " (bundle " + bsn + " " + s.version() + ")");
-        o.println("  set " + s.id() + ": " + s.templates().size() + " templates " + classCounts(s) + ", sha256 " + s.checksum());
+        o.println("  set " + s.id() + ": " + s.templates().size() + (s.templates().size() == 1 ? " template " : " templates ") + classCounts(s) + ", sha256 " + s.checksum());
         for (Template t : s.templates()) {
             o.printf(Locale.ROOT, "    %-16s %-7s %-16s %8.1f - %8.1f A  %6d px%n", t.id(), t.objectClass().key(), t.subclass(),
                     t.minRestVacuumAngstrom(), t.maxRestVacuumAngstrom(), t.size());
@@ -265,9 +334,16 @@ public final class TemplatesCommand implements Command {
         TemplateExtender ext = extender;
         List<TemplateExtender.Problem> problems = ext == null ? List.of() : ext.problems();
         if (a.json) {
+            List<TemplateExtender.Registered> loaded = ext == null ? List.of() : ext.registered();
             for (Provided<TemplateSet> p : sets) {
+                List<String> notes = new ArrayList<>();
+                for (TemplateExtender.Registered r : loaded) {
+                    if (r.set() == p.service()) {
+                        notes.addAll(r.notes());
+                    }
+                }
                 ctx.out().println(describe(p.service()).put("status", "ok").put("error", null)
-                        .put("bundle", p.bundleSymbolicName()).put("bundle_version", p.bundleVersion()));
+                        .put("bundle", p.bundleSymbolicName()).put("bundle_version", p.bundleVersion()).put("notes", notes));
             }
             for (TemplateExtender.Problem pr : problems) {
                 ctx.out().println(Json.object().put("status", "failed").put("bundle", pr.bundle()).put("error", pr.message()));

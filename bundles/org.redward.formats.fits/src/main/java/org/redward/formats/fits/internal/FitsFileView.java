@@ -33,12 +33,15 @@ final class FitsFileView implements AutoCloseable {
     private final Path temporary;
     private final Fits fits;
     final List<BasicHDU<?>> hdus;
+    /** Why reading stopped before the end of the file (a damaged later HDU), or empty. */
+    final String damage;
 
-    private FitsFileView(Path file, Path temporary, Fits fits, List<BasicHDU<?>> hdus) {
+    private FitsFileView(Path file, Path temporary, Fits fits, List<BasicHDU<?>> hdus, String damage) {
         this.file = file;
         this.temporary = temporary;
         this.fits = fits;
         this.hdus = hdus;
+        this.damage = damage;
     }
 
     static boolean isGzip(byte[] head) {
@@ -96,15 +99,18 @@ final class FitsFileView implements AutoCloseable {
             }
             fits = new Fits(readFrom.toFile());
             List<BasicHDU<?>> list = new ArrayList<>();
+            String damage = "";
             for (int i = 0; ; i++) {
                 BasicHDU<?> h;
                 try {
                     h = fits.readHDU();
-                } catch (Exception e) {
+                } catch (Exception | OutOfMemoryError e) {
+                    // OutOfMemoryError here comes from absurd axis counts in a damaged header, not from a full heap
                     if (i == 0) {
                         throw new SpectrumReadException(file, "HDU 0: the primary header cannot be read (" + message(e) + ")", e);
                     }
-                    // a damaged trailing HDU: keep what came before, report it if it is needed
+                    // a damaged later HDU: keep what came before, say so if nothing usable is found
+                    damage = "HDU " + i + " cannot be read (" + message(e) + ")";
                     break;
                 }
                 if (h == null) {
@@ -115,7 +121,7 @@ final class FitsFileView implements AutoCloseable {
                 if (dataBytes < 0) {
                     throw new SpectrumReadException(file, "HDU " + i + ": the header gives an impossible data size");
                 }
-                if (dataStart + dataBytes > length) {
+                if (dataStart + dataBytes > length || dataStart + dataBytes < 0) {
                     throw new SpectrumReadException(file, "HDU " + i + ": truncated (the header announces " + dataBytes
                             + " bytes of data, the file ends " + Math.max(0, length - dataStart) + " bytes after the header)");
                 }
@@ -124,12 +130,12 @@ final class FitsFileView implements AutoCloseable {
             if (list.isEmpty()) {
                 throw new SpectrumReadException(file, "no HDU could be read");
             }
-            return new FitsFileView(file, tmp, fits, list);
+            return new FitsFileView(file, tmp, fits, list, damage);
         } catch (SpectrumReadException e) {
             closeQuietly(fits);
             delete(tmp);
             throw e;
-        } catch (Exception | StackOverflowError e) {
+        } catch (Exception | StackOverflowError | OutOfMemoryError e) {
             closeQuietly(fits);
             delete(tmp);
             throw new SpectrumReadException(file, "not a readable FITS file (" + message(e) + ")", e);

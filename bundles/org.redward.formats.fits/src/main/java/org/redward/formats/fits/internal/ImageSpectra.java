@@ -5,7 +5,8 @@ import java.util.Locale;
 import java.util.Optional;
 
 import org.redward.api.formats.SpectrumRecord;
-import org.redward.formats.fits.internal.Assembly.ErrorKind;
+import org.redward.api.formats.SpectrumAssembly;
+import org.redward.api.formats.SpectrumAssembly.ErrorKind;
 import org.redward.spectrum.Medium;
 import org.redward.spectrum.Sampling;
 import org.redward.spectrum.SpectralUnit;
@@ -159,7 +160,7 @@ final class ImageSpectra implements Plan {
             return SpectrumRecord.ok(view.file, index, where, readSpectrum(index, where));
         } catch (IllegalArgumentException e) {
             String m = e.getMessage();
-            return SpectrumRecord.failed(view.file, index, where, view.file + ": " + (m.startsWith("HDU ") ? m : where + ": " + m));
+            return SpectrumRecord.failed(view.file, index, where, view.file + ": " + (m.startsWith(where) ? m : where + ": " + m));
         } catch (Exception | OutOfMemoryError e) {
             return SpectrumRecord.failed(view.file, index, where, view.file + ": " + where + ": cannot be read ("
                     + FitsFileView.message(e) + ")");
@@ -273,7 +274,7 @@ final class ImageSpectra implements Plan {
         if (!planes && rows > 1) {
             b.objectId(md.objectId().map(x -> x + "#").orElse("row ") + index);
         }
-        return Assembly.build(coords, unit, medium, sampling, flux, err, kind, mask, fluxUnit, b.build(),
+        return SpectrumAssembly.build(coords, unit, medium, sampling, flux, err, kind, mask, fluxUnit, b.build(),
                 settings.profile().map(p -> p.maskedRegionsVacuumAngstrom()).orElse(List.of()),
                 "the flux", errName, maskName);
     }

@@ -75,7 +75,8 @@ final class Layouts {
             if (ImageSpectra.looksLikeSpectra(view, i)) {
                 return ImageSpectra.of(view, i, s, false);
             }
-            if (view.hdus.get(i) instanceof BinaryTableHDU && TableSpectra.looksLikeSpectra(view.hdus.get(i).getHeader(), s)) {
+            if (view.hdus.get(i) instanceof BinaryTableHDU && (s.get("flux.column").isPresent()
+                    || TableSpectra.looksLikeSpectra(view.hdus.get(i).getHeader(), s))) {
                 return TableSpectra.of(view, List.of(i), s);
             }
         }
@@ -110,9 +111,9 @@ final class Layouts {
             }
             sb.append(view.name(i));
             if (view.hdus.get(i) instanceof BinaryTableHDU) {
-                sb.append(" table of ").append(h.getIntValue("NAXIS2", 0)).append(" rows");
+                sb.append(" table of ").append(h.getLongValue("NAXIS2", 0)).append(" rows");
             } else {
-                int naxis = h.getIntValue("NAXIS", 0);
+                int naxis = Math.min(999, h.getIntValue("NAXIS", 0));
                 if (naxis == 0) {
                     sb.append(" no data");
                 } else {
@@ -122,6 +123,9 @@ final class Layouts {
                     }
                 }
             }
+        }
+        if (!view.damage.isEmpty()) {
+            sb.append("; ").append(view.damage);
         }
         return sb.toString();
     }

@@ -5,8 +5,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.redward.api.formats.ColumnNames;
 import org.redward.api.formats.SpectrumRecord;
-import org.redward.formats.fits.internal.Assembly.ErrorKind;
+import org.redward.api.formats.SpectrumAssembly;
+import org.redward.api.formats.SpectrumAssembly.ErrorKind;
 import org.redward.spectrum.Medium;
 import org.redward.spectrum.Sampling;
 import org.redward.spectrum.SpectralUnit;
@@ -26,7 +28,7 @@ import nom.tam.fits.Header;
  * (linear, log10, ln), {@code wavelength.unit}, {@code medium}, {@code flux.column},
  * {@code flux.unit}, {@code ivar.column} / {@code error.column} / {@code variance.column},
  * {@code mask.column}, {@code id.column}; without them common column names are tried
- * ({@link Names}).
+ * ({@link ColumnNames}).
  */
 final class TableSpectra implements Plan {
 
@@ -39,6 +41,7 @@ final class TableSpectra implements Plan {
     private final boolean rowPerSpectrum;
     private final Settings settings;
     private final String layout;
+    private final boolean own;
 
     private TableSpectra(FitsFileView view, List<Integer> hdus, boolean rowPerSpectrum, Settings settings, String layout) {
         this.view = view;
@@ -46,11 +49,12 @@ final class TableSpectra implements Plan {
         this.rowPerSpectrum = rowPerSpectrum;
         this.settings = settings;
         this.layout = layout;
+        this.own = Layouts.OWN_LAYOUT.equalsIgnoreCase(String.valueOf(view.primary().getStringValue(Layouts.OWN_LAYOUT_KEY)).trim());
     }
 
     /** Column names (TTYPEn) of a table HDU, in order. */
     static List<String> columnNames(Header h) {
-        int n = h.getIntValue("TFIELDS", 0);
+        int n = Math.min(999, h.getIntValue("TFIELDS", 0));
         List<String> out = new ArrayList<>();
         for (int i = 1; i <= n; i++) {
             String t = h.getStringValue("TTYPE" + i);
@@ -84,7 +88,7 @@ final class TableSpectra implements Plan {
     /** True if the table looks like spectra: it has a flux column. */
     static boolean looksLikeSpectra(Header h, Settings s) {
         try {
-            return pick(columnNames(h), s, "flux.column", Names.FLUX, "").isPresent();
+            return pick(columnNames(h), s, "flux.column", ColumnNames.FLUX, "").isPresent();
         } catch (IllegalArgumentException e) {
             return false;
         }
@@ -112,7 +116,7 @@ final class TableSpectra implements Plan {
         Header h = view.hdus.get(first).getHeader();
         List<String> names = columnNames(h);
         String where = view.name(first);
-        Column flux = pick(names, s, "flux.column", Names.FLUX, where).orElseThrow(() -> new IllegalArgumentException(
+        Column flux = pick(names, s, "flux.column", ColumnNames.FLUX, where).orElseThrow(() -> new IllegalArgumentException(
                 where + ": no flux column (columns are " + names + ")"));
         long rep = repeat(h, flux.index());
         if (rep == -2) {
@@ -158,7 +162,7 @@ final class TableSpectra implements Plan {
     }
 
     private static String prefixed(String where, String message) {
-        return message.startsWith("HDU ") ? message : where + ": " + message;
+        return message.startsWith(where) ? message : where + ": " + message;
     }
 
     private Spectrum readSpectrum(int hdu, int row, String where) throws Exception {
@@ -167,27 +171,30 @@ final class TableSpectra implements Plan {
         BinaryTable t = th.getData();
         List<String> names = columnNames(h);
         Keys keys = view.keys(hdu);
-        Column flux = pick(names, settings, "flux.column", Names.FLUX, where)
+        Column flux = pick(names, settings, "flux.column", ColumnNames.FLUX, where)
                 .orElseThrow(() -> new IllegalArgumentException("no flux column (columns are " + names + ")"));
+        if (row < 0 && h.getIntValue("NAXIS2", 0) == 0) {
+            throw new IllegalArgumentException("no pixels (the table has no rows)");
+        }
         double[] f = column(t, h, flux, row);
         int n = f.length;
         // errors
         ErrorKind kind = ErrorKind.INVERSE_VARIANCE;
         Optional<Column> err = pick(names, settings, "ivar.column", settings.get("error.column").isPresent()
-                || settings.get("variance.column").isPresent() ? List.of() : Names.IVAR, where);
+                || settings.get("variance.column").isPresent() ? List.of() : ColumnNames.IVAR, where);
         if (err.isEmpty()) {
-            err = pick(names, settings, "error.column", settings.get("variance.column").isPresent() ? List.of() : Names.SIGMA, where);
+            err = pick(names, settings, "error.column", settings.get("variance.column").isPresent() ? List.of() : ColumnNames.SIGMA, where);
             kind = ErrorKind.SIGMA;
         }
         if (err.isEmpty()) {
-            err = pick(names, settings, "variance.column", Names.VARIANCE, where);
+            err = pick(names, settings, "variance.column", ColumnNames.VARIANCE, where);
             kind = ErrorKind.VARIANCE;
         }
-        double[] e = err.isPresent() ? column(t, h, err.get(), row) : null;
-        Optional<Column> maskCol = pick(names, settings, "mask.column", Names.MASK, where);
+        double[] e = err.isPresent() && (!own || OwnFormat.hasErrors(h)) ? column(t, h, err.get(), row) : null;
+        Optional<Column> maskCol = pick(names, settings, "mask.column", ColumnNames.MASK, where);
         double[] m = maskCol.isPresent() ? column(t, h, maskCol.get(), row) : null;
         // wavelength
-        Optional<Column> wave = pick(names, settings, "wavelength.column", Names.WAVELENGTH, where);
+        Optional<Column> wave = pick(names, settings, "wavelength.column", ColumnNames.WAVELENGTH, where);
         double[] coords;
         SpectralUnit unit;
         Sampling sampling;
@@ -201,7 +208,7 @@ final class TableSpectra implements Plan {
             }
             String tunit = h.getStringValue("TUNIT" + (wave.get().index() + 1));
             String scale = settings.get("wavelength.scale").orElse(
-                    Names.isLogWavelength(wave.get().name()) || (tunit != null && tunit.toLowerCase(Locale.ROOT).startsWith("log"))
+                    ColumnNames.isLogWavelength(wave.get().name()) || (tunit != null && tunit.toLowerCase(Locale.ROOT).startsWith("log"))
                             ? "log10" : "linear").toLowerCase(Locale.ROOT);
             coords = new double[n];
             for (int i = 0; i < n; i++) {
@@ -239,10 +246,10 @@ final class TableSpectra implements Plan {
             String tu = h.getStringValue("TUNIT" + (flux.index() + 1));
             return tu != null && !tu.isBlank() ? tu.trim() : keys.text("BUNIT").orElse("");
         });
-        SpectrumMetadata md = MetadataKeywords.read(keys, settings);
-        SpectrumMetadata.Builder b = md.toBuilder().extra("redward.medium_source", mediumSource);
-        if (row >= 0) {
-            Optional<Column> id = pick(names, settings, "id.column", Names.ID, where);
+        SpectrumMetadata md = own ? OwnFormat.readMetadata(h) : MetadataKeywords.read(keys, settings);
+        SpectrumMetadata.Builder b = own ? md.toBuilder() : md.toBuilder().extra("redward.medium_source", mediumSource);
+        if (row >= 0 && !own) {
+            Optional<Column> id = pick(names, settings, "id.column", ColumnNames.ID, where);
             if (id.isPresent()) {
                 Object v = t.getElement(row, id.get().index());
                 String s = text(v);
@@ -253,7 +260,7 @@ final class TableSpectra implements Plan {
                 b.objectId(md.objectId().map(x -> x + "#").orElse("row ") + row);
             }
         }
-        return Assembly.build(coords, unit, medium, sampling, f, e, kind, m, fluxUnit, b.build(),
+        return SpectrumAssembly.build(coords, unit, medium, sampling, f, e, kind, m, fluxUnit, b.build(),
                 settings.profile().map(p -> p.maskedRegionsVacuumAngstrom()).orElse(List.of()),
                 "column '" + flux.name() + "'", err.map(c -> "column '" + c.name() + "'").orElse(""),
                 maskCol.map(c -> "column '" + c.name() + "'").orElse(""));
@@ -267,7 +274,7 @@ final class TableSpectra implements Plan {
             u = u.replaceAll("(?i)^(log10|log|ln)?\\s*\\(?\\s*|\\s*\\)?\\s*$", "");
         }
         if (u.isEmpty()) {
-            return Names.isFrequency(wave.name()) ? SpectralUnit.HERTZ : SpectralUnit.ANGSTROM;
+            return ColumnNames.isFrequency(wave.name()) ? SpectralUnit.HERTZ : SpectralUnit.ANGSTROM;
         }
         String unitText = u;
         return SpectralUnit.parse(unitText).orElseThrow(() -> new IllegalArgumentException(

@@ -1,4 +1,4 @@
-package org.redward.formats.fits.internal;
+package org.redward.api.formats;
 
 import java.util.List;
 
@@ -9,15 +9,20 @@ import org.redward.spectrum.SpectralUnit;
 import org.redward.spectrum.Spectrum;
 import org.redward.spectrum.SpectrumMetadata;
 
-/** Puts the arrays read from a file together into a {@link Spectrum}. Stateless. */
-final class Assembly {
+/**
+ * Helps readers put the arrays read from a file together into a {@link Spectrum}: error arrays
+ * of any kind to inverse variance, frequency axes reversed into increasing wavelength with their
+ * arrays, masked regions applied, lengths checked with messages that name the arrays. Stateless
+ * and thread-safe.
+ */
+public final class SpectrumAssembly {
 
     /** What an error array holds. */
-    enum ErrorKind {
+    public enum ErrorKind {
         INVERSE_VARIANCE, SIGMA, VARIANCE;
 
         /** The inverse variance of one value of this kind (0 for non-positive or non-finite values). */
-        double toInverseVariance(double v) {
+        public double toInverseVariance(double v) {
             if (!Double.isFinite(v) || v <= 0) {
                 return 0.0;
             }
@@ -29,18 +34,21 @@ final class Assembly {
         }
     }
 
-    private Assembly() {
+    private SpectrumAssembly() {
     }
 
     /**
      * Builds a spectrum. Frequency axes are stored in increasing wavelength, so the arrays are
      * reversed with them. Pixels inside {@code maskedRegions} (vacuum Angstrom) are masked.
      *
+     * @param coordinates spectral coordinates as read, in {@code unit} and {@code medium}
      * @param errors may be null (no errors known)
-     * @param mask may be null; non-zero means bad
+     * @param mask may be null; non-zero (or NaN) means bad
+     * @param maskedRegions observed-frame [from, to] ranges in vacuum Angstrom to mask; may be null
+     * @param fluxName how to name the flux in messages, e.g. {@code column 'flux'}
      * @throws IllegalArgumentException naming {@code what} for mismatched lengths or a bad axis
      */
-    static Spectrum build(double[] coordinates, SpectralUnit unit, Medium medium, Sampling sampling,
+    public static Spectrum build(double[] coordinates, SpectralUnit unit, Medium medium, Sampling sampling,
             double[] flux, double[] errors, ErrorKind kind, double[] mask, String fluxUnit,
             SpectrumMetadata metadata, List<double[]> maskedRegions, String fluxName, String errorName, String maskName) {
         int n = coordinates.length;
