@@ -16,6 +16,8 @@ import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
 import org.osgi.framework.BundleException;
 import org.redward.api.commands.PlatformInfo;
+import org.redward.api.cosmology.CosmologyCalculator;
+import org.redward.api.cosmology.CosmologyRegistry;
 import org.redward.api.formats.ReaderRegistry;
 import org.redward.api.formats.SpectrumReadException;
 import org.redward.api.formats.SpectrumReader;
@@ -53,10 +55,18 @@ final class OsgiBackend implements Backend {
     private final java.util.function.Supplier<LineListRegistry> lineLists;
     private final java.util.function.Supplier<LineFinder> finder;
     private final String lineListId;
+    private final java.util.function.Supplier<CosmologyRegistry> cosmologies;
+    private final java.util.function.Supplier<CosmologyCalculator> calculator;
+    private final String cosmologyId;
 
     OsgiBackend(BundleContext context, ReaderRegistry readers, EstimatorRegistry estimators, TemplateRegistry templates,
             PlatformInfo platform, List<ProviderRegistry<?>> registries, String user, String templateSet,
-            java.util.function.Supplier<LineListRegistry> lineLists, java.util.function.Supplier<LineFinder> finder, String lineListId) {
+            java.util.function.Supplier<LineListRegistry> lineLists, java.util.function.Supplier<LineFinder> finder, String lineListId,
+            java.util.function.Supplier<CosmologyRegistry> cosmologies, java.util.function.Supplier<CosmologyCalculator> calculator,
+            String cosmologyId) {
+        this.cosmologies = cosmologies;
+        this.calculator = calculator;
+        this.cosmologyId = cosmologyId;
         this.lineLists = lineLists;
         this.finder = finder;
         this.lineListId = lineListId;
@@ -219,9 +229,29 @@ final class OsgiBackend implements Backend {
         }
     }
 
+    /** Velocities and the Hubble-law distance, then the cosmology service's distances when it is installed. */
     @Override
     public List<String[]> velocitiesAndDistances(double z) {
-        return Answers.velocityRows(z);
+        List<String[]> rows = new ArrayList<>(Answers.velocityRows(z));
+        CosmologyRegistry r = cosmologies.get();
+        CosmologyCalculator c = calculator.get();
+        if (r == null || c == null) {
+            rows.add(new String[] {"distances", "–", "no cosmology service installed"});
+            return rows;
+        }
+        String id = cosmologyId == null || cosmologyId.isEmpty() ? CosmologyRegistry.DEFAULT_ID : cosmologyId;
+        var set = r.find(id).or(() -> r.providers().stream().findFirst());
+        if (set.isEmpty()) {
+            rows.add(new String[] {"distances", "–", "no cosmology parameter set installed"});
+            return rows;
+        }
+        try {
+            var params = set.get().service().parameters();
+            rows.addAll(Answers.distanceRows(set.get().id(), c.of(params), c.of(params.toBuilder().h0(73.04).build()), z));
+        } catch (RuntimeException e) {
+            rows.add(new String[] {"distances", "–", "cosmology failed at this z: " + e.getMessage()});
+        }
+        return rows;
     }
 
     @Override

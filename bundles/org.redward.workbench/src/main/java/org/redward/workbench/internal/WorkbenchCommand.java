@@ -24,6 +24,8 @@ import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.PlatformInfo;
 import org.redward.api.commands.UsageException;
+import org.redward.api.cosmology.CosmologyCalculator;
+import org.redward.api.cosmology.CosmologyRegistry;
 import org.redward.api.formats.ReaderRegistry;
 import org.redward.api.lines.LineFinder;
 import org.redward.api.lines.LineListRegistry;
@@ -59,6 +61,11 @@ public final class WorkbenchCommand implements Command {
     private volatile LineListRegistry lineLists;
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
     private volatile LineFinder lineFinder;
+
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyRegistry cosmologies;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyCalculator cosmologyCalculator;
 
     private final List<ProviderRegistry<?>> registries = new CopyOnWriteArrayList<>();
     private BundleContext bundleContext;
@@ -106,6 +113,8 @@ public final class WorkbenchCommand implements Command {
         String templates = "";
         @Option(names = "--linelist", paramLabel = "ID", description = "line list drawn and offered for naming (default: standard)")
         String lineList = "";
+        @Option(names = "--cosmology", paramLabel = "ID", description = "parameter set for the distances panel (default: planck2018)")
+        String cosmology = "";
         @Option(names = "--who", paramLabel = "NAME", description = "the name recorded with each decision (default: the system user)")
         String who;
         @Option(names = "--snapshot", paramLabel = "PNG", description = "open the window, draw the first spectrum, save the window as a PNG and exit")
@@ -151,7 +160,7 @@ public final class WorkbenchCommand implements Command {
         Path journalFile = ctx.workingDirectory().resolve(a.journal != null ? a.journal : Path.of("redward-decisions.jsonl"));
         String who = a.who != null ? a.who : System.getProperty("user.name", "unknown");
         OsgiBackend backend = new OsgiBackend(bundleContext, readers, estimators, templates, platform, registries, who, a.templates,
-                () -> lineLists, () -> lineFinder, a.lineList);
+                () -> lineLists, () -> lineFinder, a.lineList, () -> cosmologies, () -> cosmologyCalculator, a.cosmology);
         Path snapshot = a.snapshot == null ? null : ctx.workingDirectory().resolve(a.snapshot);
         Path export = a.export == null ? null : ctx.workingDirectory().resolve(a.export);
 
