@@ -7,6 +7,7 @@ import java.util.Locale;
 import org.redward.api.cosmology.Cosmology;
 import org.redward.api.cosmology.CosmologyParameters;
 import org.redward.api.cosmology.Distances;
+import org.redward.api.frames.VelocityConvention;
 import org.redward.api.redshift.Alternative;
 import org.redward.api.redshift.RedshiftSolution;
 
@@ -42,13 +43,13 @@ final class Answers {
     static List<String[]> velocityRows(double z) {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"z", String.format(Locale.ROOT, "%.6f", z), ""});
-        rows.add(new String[] {"cz (optical)", kms(Kinematics.opticalKmPerS(z)), z > 0.1 ? "cz is not a velocity at this z" : ""});
-        rows.add(new String[] {"radio cz/(1+z)", kms(Kinematics.radioKmPerS(z)), ""});
-        rows.add(new String[] {"relativistic", kms(Kinematics.relativisticKmPerS(z)), ""});
+        rows.add(new String[] {"cz (optical)", kms(VelocityConvention.OPTICAL.velocityKmPerS(z)), z > 0.1 ? "cz is not a velocity at this z" : ""});
+        rows.add(new String[] {"radio cz/(1+z)", kms(VelocityConvention.RADIO.velocityKmPerS(z)), ""});
+        rows.add(new String[] {"relativistic", kms(VelocityConvention.RELATIVISTIC.velocityKmPerS(z)), ""});
         String caution = z > HUBBLE_LAW_LIMIT_Z ? "Hubble law misleads at z > " + HUBBLE_LAW_LIMIT_Z + ": use a cosmology"
                 : z < 0.003 ? "peculiar velocities dominate at this z" : "";
-        rows.add(new String[] {"cz/H0, H0 = 67.66", mpc(Kinematics.opticalKmPerS(z) / 67.66), caution});
-        rows.add(new String[] {"cz/H0, H0 = 73.04", mpc(Kinematics.opticalKmPerS(z) / 73.04), caution});
+        rows.add(new String[] {"cz/H0, H0 = 67.66", mpc(VelocityConvention.OPTICAL.velocityKmPerS(z) / 67.66), caution});
+        rows.add(new String[] {"cz/H0, H0 = 73.04", mpc(VelocityConvention.OPTICAL.velocityKmPerS(z) / 73.04), caution});
         return rows;
     }
 
