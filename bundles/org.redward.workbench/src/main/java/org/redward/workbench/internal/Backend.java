@@ -14,8 +14,14 @@ import org.redward.spectrum.Spectrum;
  */
 interface Backend {
 
-    /** One spectrum ready to draw; {@code skyFlux} is null when the file has none. */
-    record Loaded(Spectrum spectrum, double[] skyFlux, String layout) {
+    /**
+     * One spectrum ready to draw; {@code skyFlux} is null when the file has none; {@code found}
+     * holds the lines the finder measured (empty when none is installed).
+     */
+    record Loaded(Spectrum spectrum, double[] skyFlux, String layout, List<org.redward.charts.FoundLine> found) {
+        public Loaded {
+            found = List.copyOf(found);
+        }
     }
 
     /**

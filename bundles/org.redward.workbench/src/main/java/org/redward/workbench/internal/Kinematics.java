@@ -1,10 +1,8 @@
 package org.redward.workbench.internal;
 
 /**
- * The few velocity formulas the workbench shows directly. Pure functions; thread-safe.
- *
- * <p>Definitions (FITS Standard 3.0 Table 8.5 and Greisen et al. 2006, A&amp;A 446, 747, for the
- * optical and radio conventions; the relativistic Doppler formula is textbook physics).
+ * The two small formulas of the workbench's own (velocity conventions come from the frames API).
+ * Pure functions; thread-safe.
  */
 final class Kinematics {
 
@@ -12,25 +10,6 @@ final class Kinematics {
     static final double C_KM_PER_S = 299_792.458;
 
     private Kinematics() {
-    }
-
-    /** Optical convention: {@code v = c z}. km/s; NaN in, NaN out. */
-    static double opticalKmPerS(double z) {
-        return C_KM_PER_S * z;
-    }
-
-    /** Radio convention: {@code v = c z / (1 + z)}. km/s; NaN for z &lt;= -1. */
-    static double radioKmPerS(double z) {
-        return z > -1 ? C_KM_PER_S * z / (1 + z) : Double.NaN;
-    }
-
-    /** Relativistic Doppler: {@code v = c ((1+z)^2 - 1) / ((1+z)^2 + 1)}. km/s; NaN for z &lt;= -1. */
-    static double relativisticKmPerS(double z) {
-        if (!(z > -1)) {
-            return Double.NaN;
-        }
-        double q = (1 + z) * (1 + z);
-        return C_KM_PER_S * (q - 1) / (q + 1);
     }
 
     /**

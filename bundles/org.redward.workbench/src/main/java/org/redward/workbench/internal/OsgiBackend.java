@@ -16,11 +16,16 @@ import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
 import org.osgi.framework.BundleException;
 import org.redward.api.commands.PlatformInfo;
+import org.redward.api.cosmology.CosmologyCalculator;
+import org.redward.api.cosmology.CosmologyRegistry;
 import org.redward.api.formats.ReaderRegistry;
 import org.redward.api.formats.SpectrumReadException;
 import org.redward.api.formats.SpectrumReader;
 import org.redward.api.formats.SpectrumRecord;
 import org.redward.api.formats.SpectrumSource;
+import org.redward.api.lines.FinderSettings;
+import org.redward.api.lines.LineFinder;
+import org.redward.api.lines.LineListRegistry;
 import org.redward.api.redshift.EstimationContext;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.redshift.RedshiftEstimator;
@@ -47,9 +52,24 @@ final class OsgiBackend implements Backend {
     private final List<ProviderRegistry<?>> registries;
     private final String user;
     private final String templateSet;
+    private final java.util.function.Supplier<LineListRegistry> lineLists;
+    private final java.util.function.Supplier<LineFinder> finder;
+    private final String lineListId;
+    private final java.util.function.Supplier<CosmologyRegistry> cosmologies;
+    private final java.util.function.Supplier<CosmologyCalculator> calculator;
+    private final String cosmologyId;
 
     OsgiBackend(BundleContext context, ReaderRegistry readers, EstimatorRegistry estimators, TemplateRegistry templates,
-            PlatformInfo platform, List<ProviderRegistry<?>> registries, String user, String templateSet) {
+            PlatformInfo platform, List<ProviderRegistry<?>> registries, String user, String templateSet,
+            java.util.function.Supplier<LineListRegistry> lineLists, java.util.function.Supplier<LineFinder> finder, String lineListId,
+            java.util.function.Supplier<CosmologyRegistry> cosmologies, java.util.function.Supplier<CosmologyCalculator> calculator,
+            String cosmologyId) {
+        this.cosmologies = cosmologies;
+        this.calculator = calculator;
+        this.cosmologyId = cosmologyId;
+        this.lineLists = lineLists;
+        this.finder = finder;
+        this.lineListId = lineListId;
         this.context = context;
         this.readers = readers;
         this.estimators = estimators;
@@ -149,7 +169,8 @@ final class OsgiBackend implements Backend {
                     if (!r.ok()) {
                         throw new IOException(r.error());
                     }
-                    return new Loaded(r.spectrum().orElseThrow(), null, src.layout());
+                    Spectrum s = r.spectrum().orElseThrow();
+                    return new Loaded(s, null, src.layout(), findLines(s));
                 }
             }
         }
@@ -183,19 +204,54 @@ final class OsgiBackend implements Backend {
         }
     }
 
+    /** The lines of the chosen list (default: the standard one); empty when no list is installed. */
     @Override
     public List<RestLine> lines() {
-        return DisplayLines.FALLBACK;
+        LineListRegistry r = lineLists.get();
+        if (r == null) {
+            return List.of();
+        }
+        String id = lineListId == null || lineListId.isEmpty() ? LineListRegistry.STANDARD : lineListId;
+        return r.find(id).or(() -> r.providers().stream().findFirst()).map(p -> LineViews.restLines(p.service())).orElse(List.of());
     }
 
+    /** Lines found by the installed line finder with its default settings; empty when none is installed. */
     @Override
     public List<FoundLine> findLines(Spectrum spectrum) {
-        return List.of();
+        LineFinder f = finder.get();
+        if (f == null) {
+            return List.of();
+        }
+        try {
+            return LineViews.found(f.find(spectrum, FinderSettings.defaults()));
+        } catch (RuntimeException e) {
+            return List.of();
+        }
     }
 
+    /** Velocities and the Hubble-law distance, then the cosmology service's distances when it is installed. */
     @Override
     public List<String[]> velocitiesAndDistances(double z) {
-        return Answers.velocityRows(z);
+        List<String[]> rows = new ArrayList<>(Answers.velocityRows(z));
+        CosmologyRegistry r = cosmologies.get();
+        CosmologyCalculator c = calculator.get();
+        if (r == null || c == null) {
+            rows.add(new String[] {"distances", "–", "no cosmology service installed"});
+            return rows;
+        }
+        String id = cosmologyId == null || cosmologyId.isEmpty() ? CosmologyRegistry.DEFAULT_ID : cosmologyId;
+        var set = r.find(id).or(() -> r.providers().stream().findFirst());
+        if (set.isEmpty()) {
+            rows.add(new String[] {"distances", "–", "no cosmology parameter set installed"});
+            return rows;
+        }
+        try {
+            var params = set.get().service().parameters();
+            rows.addAll(Answers.distanceRows(set.get().id(), c.of(params), c.of(params.toBuilder().h0(73.04).build()), z));
+        } catch (RuntimeException e) {
+            rows.add(new String[] {"distances", "–", "cosmology failed at this z: " + e.getMessage()});
+        }
+        return rows;
     }
 
     @Override

@@ -56,11 +56,18 @@ final class Session {
             }
             w.add(files);
             if (snapshot != null) {
+                // wait (at most a minute) until the first spectrum is read, estimated and drawn;
+                // a timer wakes the loop so that sleep() cannot wait for an event that never comes
                 long limit = System.nanoTime() + 60_000_000_000L;
-                while ((w.busy() || display.readAndDispatch()) && System.nanoTime() < limit) {
-                    if (!display.readAndDispatch()) {
-                        display.sleep();
+                while (System.nanoTime() < limit) {
+                    while (display.readAndDispatch()) {
+                        // dispatch
                     }
+                    if (!w.drawPending()) {
+                        break;
+                    }
+                    display.timerExec(25, () -> { });
+                    display.sleep();
                 }
                 w.snapshot(snapshot);
             } else {

@@ -24,7 +24,11 @@ import org.redward.api.commands.CommandContext;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.PlatformInfo;
 import org.redward.api.commands.UsageException;
+import org.redward.api.cosmology.CosmologyCalculator;
+import org.redward.api.cosmology.CosmologyRegistry;
 import org.redward.api.formats.ReaderRegistry;
+import org.redward.api.lines.LineFinder;
+import org.redward.api.lines.LineListRegistry;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.registry.ProviderRegistry;
 import org.redward.api.templates.TemplateRegistry;
@@ -52,6 +56,16 @@ public final class WorkbenchCommand implements Command {
     private volatile TemplateRegistry templates;
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
     private volatile PlatformInfo platform;
+
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile LineListRegistry lineLists;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile LineFinder lineFinder;
+
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyRegistry cosmologies;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC)
+    private volatile CosmologyCalculator cosmologyCalculator;
 
     private final List<ProviderRegistry<?>> registries = new CopyOnWriteArrayList<>();
     private BundleContext bundleContext;
@@ -97,6 +111,10 @@ public final class WorkbenchCommand implements Command {
         List<String> estimators = new ArrayList<>();
         @Option(names = "--templates", paramLabel = "ID", description = "template set for estimators that need one (default: the first installed)")
         String templates = "";
+        @Option(names = "--linelist", paramLabel = "ID", description = "line list drawn and offered for naming (default: standard)")
+        String lineList = "";
+        @Option(names = "--cosmology", paramLabel = "ID", description = "parameter set for the distances panel (default: planck2018)")
+        String cosmology = "";
         @Option(names = "--who", paramLabel = "NAME", description = "the name recorded with each decision (default: the system user)")
         String who;
         @Option(names = "--snapshot", paramLabel = "PNG", description = "open the window, draw the first spectrum, save the window as a PNG and exit")
@@ -141,7 +159,8 @@ public final class WorkbenchCommand implements Command {
         }
         Path journalFile = ctx.workingDirectory().resolve(a.journal != null ? a.journal : Path.of("redward-decisions.jsonl"));
         String who = a.who != null ? a.who : System.getProperty("user.name", "unknown");
-        OsgiBackend backend = new OsgiBackend(bundleContext, readers, estimators, templates, platform, registries, who, a.templates);
+        OsgiBackend backend = new OsgiBackend(bundleContext, readers, estimators, templates, platform, registries, who, a.templates,
+                () -> lineLists, () -> lineFinder, a.lineList, () -> cosmologies, () -> cosmologyCalculator, a.cosmology);
         Path snapshot = a.snapshot == null ? null : ctx.workingDirectory().resolve(a.snapshot);
         Path export = a.export == null ? null : ctx.workingDirectory().resolve(a.export);
 

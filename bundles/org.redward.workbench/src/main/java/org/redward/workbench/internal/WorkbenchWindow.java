@@ -103,6 +103,7 @@ final class WorkbenchWindow {
     private Label messageBar;
 
     private double pickedAngstrom = Double.NaN;
+    private List<org.redward.charts.FoundLine> shownFound = List.of();
     private double shownZ = Double.NaN;
     private QueueItem shown;
     private Backend.Loaded shownLoaded;
@@ -480,6 +481,9 @@ final class WorkbenchWindow {
         QueueItem it = queue.current();
         shown = it;
         pickedAngstrom = Double.NaN;
+        if (queue.cursor() >= 0 && queueTable.getSelectionIndex() != queue.cursor()) {
+            queueTable.setSelection(queue.cursor());
+        }
         if (it == null) {
             headline.setText("Nothing in the queue" + (queue.all().isEmpty() ? "" : " passes the filter"));
             spectrumCanvas.setChart(null, "Add spectra with the button above or name files on the command line.");
@@ -597,7 +601,8 @@ final class WorkbenchWindow {
         Spectrum s = l.spectrum();
         double z = it.currentZ();
         shownZ = z;
-        SpectrumChart sc = SpectrumChart.of(s).restLines(backend.lines(), z).foundLines(backend.findLines(s));
+        shownFound = l.found();
+        SpectrumChart sc = SpectrumChart.of(s).restLines(backend.lines(), z).foundLines(shownFound);
         if (l.skyFlux() != null) {
             sc.sky(s.axis().vacuumAngstrom(), l.skyFlux());
         }
@@ -713,7 +718,18 @@ final class WorkbenchWindow {
     // ------------------------------------------------------------------ naming a line
 
     /** A click in the spectrum: remembers the wavelength and lists the lines it could be. */
-    void pick(double angstrom) {
+    void pick(double clickedAngstrom) {
+        // a click near a line the finder measured takes that line's fitted centre, so that the z
+        // from naming it is the z the lines command gives for the same identification
+        org.redward.charts.FoundLine snapped = null;
+        double tolerance = snapToleranceAngstrom(clickedAngstrom);
+        for (org.redward.charts.FoundLine f : shownFound) {
+            double d = Math.abs(f.observedVacuumAngstrom() - clickedAngstrom);
+            if (d <= tolerance && (snapped == null || d < Math.abs(snapped.observedVacuumAngstrom() - clickedAngstrom))) {
+                snapped = f;
+            }
+        }
+        final double angstrom = snapped != null ? snapped.observedVacuumAngstrom() : clickedAngstrom;
         pickedAngstrom = angstrom;
         List<RestLine> lines = new ArrayList<>(backend.lines());
         lines.removeIf(l -> Kinematics.redshiftFromLine(angstrom, l.restVacuumAngstrom()) < -0.01);
@@ -730,7 +746,9 @@ final class WorkbenchWindow {
         if (lineChoice.getItemCount() > 0) {
             lineChoice.select(0);
         }
-        picked.setText(String.format(Locale.ROOT, "Feature at %.2f Å (vacuum). Which line is it?", angstrom));
+        picked.setText(snapped != null
+                ? String.format(Locale.ROOT, "Line found at %.2f Å (vacuum, fitted centre; S/N %.1f). Which line is it?", angstrom, snapped.snr())
+                : String.format(Locale.ROOT, "Feature at %.2f Å (vacuum, as clicked). Which line is it?", angstrom));
         JFreeChart c = spectrumCanvas.chart();
         if (c != null) {
             var ms = c.getXYPlot().getDomainMarkers(Layer.FOREGROUND);
@@ -748,6 +766,22 @@ final class WorkbenchWindow {
             spectrumCanvas.markDirty();
         }
         picked.getParent().layout();
+    }
+
+    /** Four pixels of the spectrum at this wavelength, or 3 Å when no spectrum is shown. */
+    private double snapToleranceAngstrom(double angstrom) {
+        if (shownLoaded == null) {
+            return 3.0;
+        }
+        double[] wl = shownLoaded.spectrum().axis().vacuumAngstrom();
+        int i = java.util.Arrays.binarySearch(wl, angstrom);
+        i = Math.max(1, Math.min(wl.length - 1, i < 0 ? -i - 1 : i));
+        return 4 * Math.abs(wl[i] - wl[i - 1]);
+    }
+
+    /** The wavelength the next naming will use (the clicked one, or the fitted centre it snapped to). */
+    double pickedAngstrom() {
+        return pickedAngstrom;
     }
 
     private RestLine chosenLine() {
@@ -771,6 +805,7 @@ final class WorkbenchWindow {
         }
         double z = Kinematics.redshiftFromLine(pickedAngstrom, l.restVacuumAngstrom());
         decide(Verdict.LINE, z, "", l.name() + String.format(Locale.ROOT, " %.3f @ %.3f Å", l.restVacuumAngstrom(), pickedAngstrom));
+        message(String.format(Locale.ROOT, "z = %.5f from %s alone: check that the other lines fall in place before trusting it", z, l.name()));
     }
 
     /** For tests and scripts: choose the line by name (first match) after {@link #pick}. */

@@ -14,6 +14,7 @@ import java.util.stream.Stream;
 import org.eclipse.swt.widgets.Display;
 import org.junit.jupiter.api.Test;
 import org.redward.spectrum.Spectrum;
+import org.redward.testkit.HeadlessDisplay;
 import org.redward.testkit.SharedData;
 
 /**
@@ -74,15 +75,23 @@ class QueueRedrawBenchmark {
             int steps = 300;
             double[] ms = new double[steps];
             double[] drawOnly = new double[steps];
+            double[] cpu = new double[steps];
+            java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
+            String loadBefore = Files.readString(Path.of("/proc/loadavg")).trim();
             for (int i = 0; i < steps; i++) {
+                long c0 = threads.getCurrentThreadCpuTime();
                 long t0 = System.nanoTime();
                 w.move(1);
                 waitDrawn(display, w);
                 ms[i] = (System.nanoTime() - t0) / 1e6;
+                cpu[i] = (threads.getCurrentThreadCpuTime() - c0) / 1e6;
                 drawOnly[i] = w.spectrumCanvas().lastDrawMillis() + w.scoreCanvas().lastDrawMillis();
             }
             report("next spectrum, move to both charts painted", ms);
             report("next spectrum, Java2D drawing of both charts", drawOnly);
+            report("next spectrum, CPU time of the UI thread", cpu);
+            System.out.printf(Locale.ROOT, "BENCHMARK workbench load average before: %s, after: %s (2 cores; wall times grow with load, CPU time much less)%n",
+                    loadBefore, Files.readString(Path.of("/proc/loadavg")).trim());
             System.out.printf(Locale.ROOT, "BENCHMARK workbench queue of %d spectra, %d moves at 1440x900 (goal < 100 ms)%n",
                     w.queue().all().size(), steps);
             w.shell().dispose();

@@ -9,7 +9,10 @@ import java.util.List;
 import nom.tam.fits.BasicHDU;
 import nom.tam.fits.BinaryTableHDU;
 import nom.tam.fits.Fits;
+import org.redward.api.lines.FinderSettings;
 import org.redward.api.redshift.ScoreCurve;
+import org.redward.lines.internal.LineListFile;
+import org.redward.lines.internal.MatchedFilterFinder;
 import org.redward.charts.FoundLine;
 import org.redward.charts.RestLine;
 import org.redward.spectrum.Medium;
@@ -67,7 +70,7 @@ class TestBackend implements Backend {
             SpectralAxis axis = SpectralAxis.logLinear(loglam[0], 1e-4, n, Medium.VACUUM);
             String id = f.getFileName().toString().replace(".fits", "");
             Spectrum s = Spectrum.of(axis, fl, iv, m, "1e-17 erg/s/cm²/Å", SpectrumMetadata.builder().objectId(id).build());
-            return new Loaded(s, sk, "SDSS spec (test reader)");
+            return new Loaded(s, sk, "SDSS spec (test reader)", findLines(s));
         } catch (RuntimeException e) {
             throw new IOException(f.getFileName() + ": not a readable FITS spectrum (" + e.getMessage() + ")");
         }
@@ -135,14 +138,16 @@ class TestBackend implements Backend {
                 emission ? List.of() : List.of("test scorer: absorption comb only"));
     }
 
+    /** The product's standard line list (bundle org.redward.lines), read directly. */
     @Override
     public List<RestLine> lines() {
-        return DisplayLines.FALLBACK;
+        return LineViews.restLines(LineListFile.standard());
     }
 
+    /** The product's line finder (bundle org.redward.lines), called directly. */
     @Override
     public List<FoundLine> findLines(Spectrum spectrum) {
-        return List.of();
+        return LineViews.found(new MatchedFilterFinder().find(spectrum, FinderSettings.defaults()));
     }
 
     @Override

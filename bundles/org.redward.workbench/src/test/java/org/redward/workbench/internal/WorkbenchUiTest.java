@@ -18,6 +18,16 @@ import org.eclipse.swt.widgets.Event;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.redward.api.lines.DetectedLine;
+import org.redward.api.lines.FinderSettings;
+import org.redward.api.lines.Identification;
+import org.redward.api.lines.IdentifySettings;
+import org.redward.api.lines.LineMatch;
+import org.redward.lines.internal.LineListFile;
+import org.redward.lines.internal.MatchedFilterFinder;
+import org.redward.lines.internal.PairVoteIdentifier;
+import org.redward.spectrum.Spectrum;
+import org.redward.testkit.HeadlessDisplay;
 import org.redward.testkit.SharedData;
 
 /**
@@ -153,12 +163,24 @@ class WorkbenchUiTest {
             HeadlessDisplay.xdotool("mousemove", Integer.toString(p.x), Integer.toString(p.y));
             HeadlessDisplay.xdotool("click", "1");
             pump(300);
-            assertTrue(w.chooseLine("Hα"), "Hα offered for the clicked feature");
+            assertTrue(w.chooseLine("H-alpha"), "H-alpha offered for the clicked feature");
             w.snapshot(SHOTS.resolve("4-feature-named.png"));
             w.setZFromLine();
             QueueItem fourth = w.queue().current();
             assertEquals(Verdict.LINE, fourth.decision().verdict());
             zLine = fourth.decision().z();
+
+            // the click snapped to the line the finder fitted; naming it H-alpha gives the z that the
+            // line identification of the lines bundle gives for the same detected line (to 1e-5)
+            Spectrum spec = l.spectrum();
+            List<DetectedLine> detected = new MatchedFilterFinder().find(spec, FinderSettings.defaults()).lines();
+            assertTrue(detected.stream().anyMatch(d -> d.centreAngstrom() == w.pickedAngstrom()), "click snapped to a fitted centre");
+            Identification id = new PairVoteIdentifier().identify(detected, LineListFile.standard(), IdentifySettings.defaults(),
+                    spec.axis().minVacuumAngstrom(), spec.axis().maxVacuumAngstrom());
+            LineMatch ha = id.best().orElseThrow().matches().stream()
+                    .filter(m -> m.line().name().equals("H-alpha")).findFirst().orElseThrow();
+            assertEquals(w.pickedAngstrom(), detected.get(ha.detectedIndex()).centreAngstrom(), 0, "same detected line");
+            assertEquals(ha.z(), zLine, 1e-5, "workbench z from a named line against the lines bundle's identification");
             // SDSS published z = 0.03175354 (truth.tsv); a click is good to a fraction of a pixel
             // (69 km/s per pixel, 1e-4 in log10 lambda), and Hα's emission centre may sit a few tens of km/s off
             assertEquals(0.03175354, zLine, 3e-4);

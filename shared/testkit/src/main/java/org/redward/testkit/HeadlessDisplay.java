@@ -1,4 +1,4 @@
-package org.redward.workbench.internal;
+package org.redward.testkit;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -7,28 +7,32 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Assumptions;
 
 /**
- * Makes sure an X server answers on the display named by {@code DISPLAY} (the build sets
- * {@code :97} for tests): starts {@code Xvfb} there when nothing is listening, so that
- * {@code mvn verify} runs the UI tests without a wrapper. Without Xvfb installed the tests are
+ * Makes sure an X server answers on the display named by {@code DISPLAY} (the workbench build
+ * sets {@code :97} for its tests): starts {@code Xvfb} there when nothing is listening, so that
+ * {@code mvn verify} runs the UI tests without a wrapper (apt packages: xvfb, libgtk-3-0,
+ * fonts-dejavu-core, xdotool). Without Xvfb installed the tests are
  * skipped, except in CI where they fail.
  */
-final class HeadlessDisplay {
+public final class HeadlessDisplay {
 
     private static Process xvfb;
 
     private HeadlessDisplay() {
     }
 
-    static synchronized void ensure() throws IOException, InterruptedException {
+    /**
+     * The X display to use: {@code DISPLAY} when set, else {@code :97}; an X server is started
+     * there when none listens.
+     */
+    public static synchronized String ensure() throws IOException, InterruptedException {
         String display = System.getenv("DISPLAY");
         if (display == null || display.isBlank()) {
-            unavailable("DISPLAY is not set (the build sets it to :97)");
-            return;
+            display = ":97";
         }
         String number = display.substring(display.indexOf(':') + 1).split("\\.")[0];
         Path socket = Path.of("/tmp/.X11-unix/X" + number);
         if (Files.exists(socket)) {
-            return;
+            return display;
         }
         if (xvfb == null) {
             try {
@@ -36,7 +40,7 @@ final class HeadlessDisplay {
                         .redirectErrorStream(true).redirectOutput(ProcessBuilder.Redirect.DISCARD).start();
             } catch (IOException e) {
                 unavailable("Xvfb is not installed (apt-get install xvfb): " + e.getMessage());
-                return;
+                return display;
             }
             Runtime.getRuntime().addShutdownHook(new Thread(() -> xvfb.destroy()));
         }
@@ -46,6 +50,7 @@ final class HeadlessDisplay {
         if (!Files.exists(socket)) {
             unavailable("Xvfb did not come up on " + display);
         }
+        return display;
     }
 
     private static void unavailable(String why) {
@@ -56,7 +61,7 @@ final class HeadlessDisplay {
     }
 
     /** Runs xdotool with these arguments (real X events through the XTEST extension). */
-    static void xdotool(String... args) throws IOException, InterruptedException {
+    public static void xdotool(String... args) throws IOException, InterruptedException {
         String[] cmd = new String[args.length + 1];
         cmd[0] = "xdotool";
         System.arraycopy(args, 0, cmd, 1, args.length);
