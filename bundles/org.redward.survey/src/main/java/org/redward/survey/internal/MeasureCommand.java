@@ -27,6 +27,13 @@ import picocli.CommandLine.Parameters;
 @Component(property = {Command.NAME + "=measure", Command.SUMMARY + "=redshifts, classes, velocities, distances -> catalogue"})
 public final class MeasureCommand implements Command {
 
+    private org.osgi.framework.BundleContext bundleContext;
+
+    @org.osgi.service.component.annotations.Activate
+    void activate(org.osgi.framework.BundleContext bc) {
+        this.bundleContext = bc;
+    }
+
     static final List<String> FRAMES = List.of("bary", "helio", "cmb", "lg");
 
     @Reference
@@ -62,6 +69,10 @@ public final class MeasureCommand implements Command {
         double zMin = -0.005;
         @Option(names = "--z-max", paramLabel = "Z", description = "highest redshift searched (default: 4)")
         double zMax = 4.0;
+        @Option(names = "--engine", paramLabel = "ENGINE", description = "local (default) or spark: run on Apache Spark with the survey feature")
+        String engine = "local";
+        @Option(names = "--master", paramLabel = "URL", description = "with --engine spark: the Spark master (default: local[*])")
+        String master;
         @Option(names = "--json", description = "one JSON object per line per spectrum on standard output")
         boolean json;
     }
@@ -79,6 +90,12 @@ public final class MeasureCommand implements Command {
             cl.usage(ctx.out());
             return 0;
         }
+        if ("spark".equalsIgnoreCase(a.engine)) {
+            return onSpark(ctx, a);
+        }
+        if (!"local".equalsIgnoreCase(a.engine)) {
+            throw new UsageException("--engine " + a.engine + ": expected local or spark");
+        }
         MeasureRequest req = request(ctx, a);
         PrintStream out = ctx.out();
         MeasureListener listener = a.json ? row -> out.println(RowCodec.toJson(row))
@@ -91,6 +108,34 @@ public final class MeasureCommand implements Command {
         }
         report(ctx.err(), s);
         return s.total() > 0 && s.ok() == 0 ? 1 : 0;
+    }
+
+    /** {@code --engine spark}: the same bundles measure the inputs inside Apache Spark; the catalogue is Parquet in --out. */
+    private int onSpark(CommandContext ctx, Args a) throws Exception {
+        request(ctx, a); // the same checks of the options
+        if (a.resume || a.json) {
+            throw new UsageException("--engine spark: " + (a.resume ? "--resume" : "--json")
+                    + " is for local runs (Spark retries failed tasks itself; a rerun completes a killed job)");
+        }
+        java.util.List<String> job = new java.util.ArrayList<>();
+        if (a.master != null) {
+            job.add("--master");
+            job.add(a.master);
+        }
+        String[][] pass = {{"--estimator", a.estimator}, {"--templates", a.templates}, {"--profile", a.profile},
+                {"--frame", a.frame}, {"--cosmology", a.cosmology}, {"--time-limit-s", Double.toString(a.timeLimitSeconds)}};
+        for (String[] o : pass) {
+            if (o[1] != null) {
+                job.add(o[0]);
+                job.add(o[1]);
+            }
+        }
+        for (Path p : a.inputs) {
+            String s = p.toString();
+            job.add(s.matches("^[a-zA-Z][a-zA-Z0-9+.-]*://.*") ? s : ctx.workingDirectory().resolve(p).toString());
+        }
+        Path out = ctx.workingDirectory().resolve(a.out == null ? Path.of("redward-spark-catalog") : a.out);
+        return new SparkEngine(ctx, bundleContext::getProperty).run(job, out);
     }
 
     static MeasureRequest request(CommandContext ctx, Args a) {
