@@ -55,7 +55,7 @@ class SparkSurveyTest {
     void sparkCatalogueEqualsSingleMachineCatalogue() throws Exception {
         Path inputs = TestSpectra.write(temp.resolve("spectra"));
         SurveyJob.Args args = SurveyJob.Args.parse(new String[] {"--bundles", bundles().toString(), "--out",
-                temp.resolve("out").toString(), "--estimator", TestSpectra.ESTIMATOR, inputs.toString()});
+                temp.resolve("out").toString(), "--estimator", TestSpectra.ESTIMATOR, "--time-limit-s", "600", inputs.toString()});
         System.setProperty("redward.spark.failFirstAttempt", "true");
         SurveyJob.Summary summary;
         try {

@@ -30,6 +30,13 @@ public final class MeasureCommand implements Command {
     @Reference
     SurveyService survey;
 
+    private org.osgi.framework.BundleContext bundleContext;
+
+    @org.osgi.service.component.annotations.Activate
+    void activate(org.osgi.framework.BundleContext bc) {
+        this.bundleContext = bc;
+    }
+
     @CommandLine.Command(name = "measure", mixinStandardHelpOptions = true, sortOptions = false,
             description = {"Measure the redshift of every spectrum of the inputs into a catalogue.",
                 "Inputs are files, folders (walked) and list files (.list/.lst or @FILE, one path a line).",
@@ -48,6 +55,10 @@ public final class MeasureCommand implements Command {
         Path out;
         @Option(names = "--resume", description = "finish the interrupted run whose journal sits beside --out")
         boolean resume;
+        @Option(names = "--engine", paramLabel = "ENGINE", description = "local (default) or spark: run on Apache Spark with the survey feature")
+        String engine = "local";
+        @Option(names = "--master", paramLabel = "URL", description = "with --engine spark: the Spark master (default: local[*])")
+        String master;
         @Option(names = "--json", description = "one JSON object per line per spectrum on standard output")
         boolean json;
     }
@@ -60,6 +71,12 @@ public final class MeasureCommand implements Command {
         }
         if (a.frame != null && !FRAMES.contains(a.frame.toLowerCase(Locale.ROOT))) {
             throw new UsageException("--frame " + a.frame + ": expected one of " + String.join(", ", FRAMES));
+        }
+        if ("spark".equalsIgnoreCase(a.engine)) {
+            return onSpark(ctx, a);
+        }
+        if (!"local".equalsIgnoreCase(a.engine)) {
+            throw new UsageException("--engine " + a.engine + ": expected local or spark");
         }
         MeasureRequest req = a.run.request(ctx).withEstimator(a.estimator)
                 .withFrame(a.frame == null ? null : a.frame.toLowerCase(Locale.ROOT)).withCosmology(a.cosmology)
@@ -92,6 +109,34 @@ public final class MeasureCommand implements Command {
         for (Map.Entry<String, String> e : s.misbehaving().entrySet()) {
             err.println("misbehaving plug-in: " + e.getKey() + ": " + e.getValue());
         }
+    }
+
+    /** {@code --engine spark}: the same bundles measure the inputs inside Apache Spark; the catalogue is Parquet in --out. */
+    private int onSpark(CommandContext ctx, Args a) throws Exception {
+        a.run.request(ctx); // the same checks of the shared options
+        if (a.resume || a.json) {
+            throw new UsageException("--engine spark: " + (a.resume ? "--resume" : "--json")
+                    + " is for local runs (Spark retries failed tasks itself; a rerun completes a killed job)");
+        }
+        List<String> job = new java.util.ArrayList<>();
+        if (a.master != null) {
+            job.add("--master");
+            job.add(a.master);
+        }
+        String[][] pass = {{"--estimator", a.estimator}, {"--templates", a.run.templates}, {"--profile", a.run.profile},
+                {"--frame", a.frame}, {"--cosmology", a.cosmology}, {"--time-limit-s", Double.toString(a.run.timeLimitSeconds)}};
+        for (String[] o : pass) {
+            if (o[1] != null) {
+                job.add(o[0]);
+                job.add(o[1]);
+            }
+        }
+        for (Path p : a.run.inputs) {
+            String s = p.toString();
+            job.add(s.matches("^[a-zA-Z][a-zA-Z0-9+.-]*://.*") ? s : ctx.workingDirectory().resolve(p).toString());
+        }
+        Path out = ctx.workingDirectory().resolve(a.out == null ? Path.of("redward-spark-catalog") : a.out);
+        return new SparkEngine(ctx, bundleContext::getProperty).run(job, out);
     }
 
     /** A plain table on standard output, one line per spectrum. */

@@ -155,8 +155,8 @@ final class Batch implements SpectrumInputs.Stream {
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-        } catch (Exception | OutOfMemoryError | StackOverflowError e) {
-            String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        } catch (Exception | LinkageError | OutOfMemoryError | StackOverflowError e) {
+            String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getClass().getSimpleName() + ": " + e.getMessage();
             try {
                 put(q, SpectrumRecord.failed(file, -1, "", file + ": cannot be read (" + m + ")"));
             } catch (InterruptedException ie) {
