@@ -25,7 +25,7 @@ final class DemoRun {
      * Estimator ids preferred as the demo's default, in order (the first is the measuring
      * pipeline's default too); otherwise the first installed id that is not an example.
      */
-    static final List<String> PREFERRED_ESTIMATORS = List.of("xcorr", "chisq", "lines");
+    static final List<String> PREFERRED_ESTIMATORS = List.of("chisq", "xcorr", "lines");
 
     /** A step of the pipeline as reported. */
     record Step(String name, String status, String detail, double seconds) {

@@ -45,7 +45,7 @@ public final class MeasureCommand implements Command {
     static final class Args {
         @Mixin
         RunOptions run = new RunOptions();
-        @Option(names = "--estimator", paramLabel = "ID", description = "redshift estimator id (default: xcorr if installed)")
+        @Option(names = "--estimator", paramLabel = "ID", description = "redshift estimator id (default: the product setting redward.default.estimator, chisq as shipped)")
         String estimator;
         @Option(names = "--frame", paramLabel = "FRAME", description = "velocity frame for the corrected columns: bary, helio, cmb or lg")
         String frame;

@@ -44,8 +44,29 @@ import org.redward.api.templates.TemplateSet;
 public final class SurveyService implements SurveyMeasurer {
 
     /** Preferred default estimator and template set, when present. */
-    static final String DEFAULT_ESTIMATOR = "xcorr";
+    /** The estimator used when none is asked for; the product setting {@value #DEFAULT_ESTIMATOR_SETTING} overrides it. */
+    static final String DEFAULT_ESTIMATOR = "chisq";
     static final String DEFAULT_TEMPLATES = "standard";
+    /** Framework property (conf/redward.properties) naming the default estimator. */
+    static final String DEFAULT_ESTIMATOR_SETTING = "redward.default.estimator";
+    /** Framework property (conf/redward.properties) naming the default template set. */
+    static final String DEFAULT_TEMPLATES_SETTING = "redward.default.templates";
+
+    private volatile String defaultEstimator = DEFAULT_ESTIMATOR;
+    private volatile String defaultTemplates = DEFAULT_TEMPLATES;
+
+    @org.osgi.service.component.annotations.Activate
+    void activate(org.osgi.framework.BundleContext bc) {
+        String e = bc.getProperty(DEFAULT_ESTIMATOR_SETTING);
+        String t = bc.getProperty(DEFAULT_TEMPLATES_SETTING);
+        defaultEstimator = e == null || e.isBlank() ? DEFAULT_ESTIMATOR : e.trim();
+        defaultTemplates = t == null || t.isBlank() ? DEFAULT_TEMPLATES : t.trim();
+    }
+
+    /** The estimator measure uses when --estimator is not given. */
+    String defaultEstimator() {
+        return defaultEstimator;
+    }
 
     @Reference
     EstimatorRegistry estimators;
@@ -171,7 +192,7 @@ public final class SurveyService implements SurveyMeasurer {
         if (id.isPresent()) {
             return require(estimators.find(id.get()), "--estimator", id.get(), estimators.ids());
         }
-        return estimators.find(DEFAULT_ESTIMATOR).or(() -> estimators.providers().stream().findFirst())
+        return estimators.find(defaultEstimator).or(() -> estimators.providers().stream().findFirst())
                 .orElseThrow(() -> new IllegalArgumentException("no redshift estimator is installed"));
     }
 
@@ -179,7 +200,7 @@ public final class SurveyService implements SurveyMeasurer {
         if (id.isPresent()) {
             return require(templates.find(id.get()), "--templates", id.get(), templates.ids()).service();
         }
-        return templates.find(DEFAULT_TEMPLATES).or(() -> templates.providers().stream().findFirst())
+        return templates.find(defaultTemplates).or(() -> templates.providers().stream().findFirst())
                 .orElseThrow(() -> new IllegalArgumentException("the estimator needs templates and no template set is installed"))
                 .service();
     }
