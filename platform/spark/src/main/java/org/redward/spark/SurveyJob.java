@@ -126,10 +126,17 @@ public final class SurveyJob {
         } else if (System.getProperty("spark.master") == null) {
             b = b.master("local[*]");
         }
+        int status = 0;
         try (SparkSession spark = b.getOrCreate()) {
             Summary s = run(spark, args);
             System.out.println(s);
+        } catch (RuntimeException | IOException e) {
+            System.err.println("redward survey job: " + e.getMessage());
+            status = 1;
         }
+        System.out.flush();
+        // the embedded framework's threads would keep the JVM alive; its shutdown hook stops it
+        System.exit(status);
     }
 
     /** What a run did. */

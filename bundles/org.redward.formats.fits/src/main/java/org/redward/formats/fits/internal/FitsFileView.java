@@ -97,7 +97,17 @@ final class FitsFileView implements AutoCloseable {
                 throw new SpectrumReadException(file, file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".gz")
                         ? "named .gz but is neither gzip nor FITS" : "not a FITS file (it does not begin with SIMPLE = T)");
             }
-            fits = new Fits(readFrom.toFile());
+            // nom-tam-fits finds its compression providers through the thread context class loader:
+            // make it this bundle's, or a host whose class path also holds nom-tam-fits (a Spark
+            // executor, a test JVM) hands it providers of another class space.
+            Thread thread = Thread.currentThread();
+            ClassLoader previous = thread.getContextClassLoader();
+            thread.setContextClassLoader(Fits.class.getClassLoader());
+            try {
+                fits = new Fits(readFrom.toFile());
+            } finally {
+                thread.setContextClassLoader(previous);
+            }
             List<BasicHDU<?>> list = new ArrayList<>();
             String damage = "";
             for (int i = 0; ; i++) {

@@ -155,7 +155,7 @@ final class Batch implements SpectrumInputs.Stream {
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-        } catch (Exception | LinkageError | OutOfMemoryError | StackOverflowError e) {
+        } catch (Exception | Error e) {
             String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getClass().getSimpleName() + ": " + e.getMessage();
             try {
                 put(q, SpectrumRecord.failed(file, -1, "", file + ": cannot be read (" + m + ")"));
