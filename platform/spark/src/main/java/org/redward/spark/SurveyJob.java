@@ -35,6 +35,8 @@ import org.redward.api.catalog.CatalogTable;
 import org.redward.api.catalog.Column;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.PlatformInfo;
+import org.redward.api.formats.ReaderRegistry;
+import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.survey.MeasureRequest;
 import org.redward.api.survey.MeasuredRow;
 import org.redward.api.survey.SurveyMeasurer;
@@ -152,8 +154,8 @@ public final class SurveyJob {
     public static Summary run(SparkSession spark, Args args) throws IOException {
         long t0 = System.nanoTime();
         Configuration hadoop = spark.sparkContext().hadoopConfiguration();
-        List<String> files = listInputs(args.inputs, hadoop);
         EmbeddedRedward driver = EmbeddedRedward.get(localBundles(args.bundles));
+        List<String> files = listInputs(args.inputs, hadoop, driver.service(ReaderRegistry.class, null));
         SurveyMeasurer measurer = driver.service(SurveyMeasurer.class, null);
         MeasureRequest probe = args.request(List.of());
         List<Column> columns = measurer.table(probe, List.of(), 0).columns();
@@ -240,7 +242,7 @@ public final class SurveyJob {
     }
 
     /** Expands folders (one level, spectrum-like files) through the Hadoop file system layer. */
-    static List<String> listInputs(List<String> inputs, Configuration conf) throws IOException {
+    static List<String> listInputs(List<String> inputs, Configuration conf, ReaderRegistry readers) throws IOException {
         List<String> out = new ArrayList<>();
         for (String in : inputs) {
             boolean remote = in.matches("^[a-zA-Z][a-zA-Z0-9+.-]*://.*") && !in.startsWith("file:");
@@ -248,7 +250,7 @@ public final class SurveyJob {
                 Path p = Paths.get(in.startsWith("file:") ? URI.create(in).getPath() : in).toAbsolutePath().normalize();
                 if (Files.isDirectory(p)) {
                     try (var s = Files.list(p)) {
-                        s.filter(Files::isRegularFile).filter(SurveyJob::looksLikeSpectrum).sorted()
+                        s.filter(Files::isRegularFile).filter(f -> readable(f, readers)).sorted()
                                 .forEach(f -> out.add(f.toString()));
                     }
                 } else if (Files.isRegularFile(p)) {
@@ -272,6 +274,30 @@ public final class SurveyJob {
             }
         }
         return out;
+    }
+
+    /**
+     * The reading facade's rule for a file found in a folder (so that a folder gives the same
+     * rows as with {@code measure}): some reader must be at least
+     * {@link SpectrumInputs#FOLDER_MIN_SCORE} sure of it.
+     */
+    static boolean readable(Path file, ReaderRegistry readers) {
+        byte[] head;
+        try (java.io.InputStream raw = new java.io.BufferedInputStream(Files.newInputStream(file))) {
+            raw.mark(2);
+            boolean gzip = raw.read() == 0x1f && raw.read() == 0x8b;
+            raw.reset();
+            java.io.InputStream in = gzip ? new java.util.zip.GZIPInputStream(raw) : raw;
+            head = in.readNBytes(8640);
+        } catch (IOException e) {
+            return true;
+        }
+        for (var r : readers.providers()) {
+            if (r.service().sniff(file, head) >= SpectrumInputs.FOLDER_MIN_SCORE) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static boolean looksLikeSpectrum(Path p) {

@@ -27,6 +27,13 @@ import org.osgi.annotation.versioning.ProviderType;
 @ProviderType
 public interface SpectrumInputs {
 
+    /**
+     * A file found in a folder is read only when some reader's {@link SpectrumReader#sniff} score
+     * reaches this (0 to 100); other files of the folder (notes, truth tables) are passed over
+     * silently. A file named explicitly is always tried.
+     */
+    int FOLDER_MIN_SCORE = 30;
+
     /** Streams the spectra of all the inputs, in order. Never throws for bad input. */
     Stream open(List<Path> inputs, ReadOptions options);
 

@@ -22,7 +22,7 @@ final class Chooser {
     /** Bytes of a file's start handed to {@link SpectrumReader#sniff}: three FITS blocks. */
     static final int HEAD_BYTES = 8640;
     /** A folder's file whose best sniff score is below this is not a spectrum: skipped silently. */
-    static final int FOLDER_MIN_SCORE = 30;
+    static final int FOLDER_MIN_SCORE = org.redward.api.formats.SpectrumInputs.FOLDER_MIN_SCORE;
 
     /** The outcome: reader and profile, or why none. */
     record Choice(Provided<SpectrumReader> reader, Optional<InstrumentProfile> profile, int score, String problem) {
