@@ -11,6 +11,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Function;
 
 import org.osgi.framework.BundleContext;
+import org.osgi.framework.ServiceReference;
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
@@ -47,11 +48,15 @@ public final class Dispatcher implements Function<String[], Integer> {
     private final Map<String, Registered> commands = new ConcurrentHashMap<>();
     private ConsoleContext context;
 
-    private record Registered(Command command, String summary, String bundle) {
+    /** A command service known by its reference only: it is activated when the user runs it, not before. */
+    private record Registered(ServiceReference<Command> ref, String summary, String bundle) {
     }
+
+    private BundleContext bundleContext;
 
     @Activate
     void activate(BundleContext bc) {
+        this.bundleContext = bc;
         Path cwd = Path.of(prop(bc, "redward.cwd", System.getProperty("user.dir")));
         Path home = Path.of(prop(bc, "redward.home", "."));
         List<Path> drops = new ArrayList<>();
@@ -71,19 +76,19 @@ public final class Dispatcher implements Function<String[], Integer> {
     }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bindCommand(Command command, Map<String, Object> props) {
-        Object name = props.get(Command.NAME);
+    void bindCommand(ServiceReference<Command> ref) {
+        Object name = ref.getProperty(Command.NAME);
         if (name != null) {
-            Object summary = props.get(Command.SUMMARY);
-            commands.put(String.valueOf(name), new Registered(command, summary == null ? "" : String.valueOf(summary),
-                    String.valueOf(props.getOrDefault("component.name", ""))));
+            Object summary = ref.getProperty(Command.SUMMARY);
+            commands.put(String.valueOf(name), new Registered(ref, summary == null ? "" : String.valueOf(summary),
+                    ref.getBundle() == null ? "" : ref.getBundle().getSymbolicName()));
         }
     }
 
-    void unbindCommand(Command command, Map<String, Object> props) {
-        Object name = props.get(Command.NAME);
+    void unbindCommand(ServiceReference<Command> ref) {
+        Object name = ref.getProperty(Command.NAME);
         if (name != null) {
-            commands.computeIfPresent(String.valueOf(name), (k, v) -> v.command() == command ? null : v);
+            commands.computeIfPresent(String.valueOf(name), (k, v) -> v.ref().equals(ref) ? null : v);
         }
     }
 
@@ -123,7 +128,16 @@ public final class Dispatcher implements Function<String[], Integer> {
             return 2;
         }
         try {
-            return r.command().run(ctx, rest);
+            Command command = bundleContext.getService(r.ref());
+            if (command == null) {
+                err.println("redward " + word + ": the command's bundle " + r.bundle() + " could not provide it (see 'redward plugins')");
+                return 1;
+            }
+            try {
+                return command.run(ctx, rest);
+            } finally {
+                bundleContext.ungetService(r.ref());
+            }
         } catch (UsageException | CommandLine.ParameterException e) {
             err.println("redward " + word + ": " + e.getMessage() + " (see: redward " + word + " --help)");
             return 2;
