@@ -17,7 +17,7 @@ import org.redward.api.redshift.RedshiftSolution;
 import org.redward.api.redshift.ScoreCurve;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.TemplateSet;
-import org.redward.redshift.kit.Calibration;
+import org.redward.api.redshift.GradeCalibration;
 import org.redward.redshift.kit.EstimatorBase;
 import org.redward.redshift.kit.FftCorrelator;
 import org.redward.redshift.kit.GriddedSpectrum;
@@ -34,13 +34,15 @@ import org.redward.spectrum.Spectrum;
  * template with the highest r statistic gives the redshift and the class; its other peaks and the
  * best peaks of the other templates (distinct by more than 1,000 km/s) are the alternatives, each
  * with its r. The error is the Kurtz & Mink (1998, PASP 110, 934) form (3/8) w / (1 + r), w the
- * FWHM of the correlation peak. The grade comes from r through {@code calibration.tsv}.
+ * FWHM of the correlation peak. The grade comes from r and the class given, through the table
+ * {@code calibration.tsv} measured on the mock survey (see {@link GradeCalibration}).
  *
  * <p>Thread-safe and deterministic; never throws for bad data.
  */
 @Component(service = RedshiftEstimator.class, property = {
     Provided.ID + "=" + CrossCorrelationEstimator.ID,
-    Provided.DESCRIPTION + "=Fourier cross-correlation with each template (Tonry & Davis 1979)",
+    Provided.DESCRIPTION + "=Fourier cross-correlation with each template (Tonry & Davis 1979);"
+            + " grades from r per class, calibrated on the mock survey (fraction of |dz|/(1+z) < 0.001)",
     RedshiftEstimator.USES_TEMPLATES + ":Boolean=true"})
 public final class CrossCorrelationEstimator extends EstimatorBase {
 
@@ -132,7 +134,7 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
             if (!(th.energy() > 0)) {
                 continue;
             }
-            double[] c = CrossCorrelation.correlate(gh, th);
+            double[] c = CrossCorrelation.correlate(gh, th, CrossCorrelation.work(n));
             // lay the wrap-free lags out contiguously: index q <-> lag k = validLo + q
             int validLo = gs.size() - n, validHi = n - t.size();
             double[] cc = new double[validHi - validLo + 1];
@@ -168,11 +170,12 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
         }
         Candidate best = distinct.get(0);
         double r = best.peak().r();
-        double reliability = calibration.reliability(r);
+        String cls = best.template().template.objectClass().key();
+        double reliability = calibration.reliability(cls, r);
         RedshiftSolution.Builder b = RedshiftSolution.builder()
                 .z(best.z(), best.zError())
                 .objectClass(best.template().template.objectClass(), best.template().template.subclass())
-                .grade(calibration.grade(r).key(), reliability);
+                .grade(calibration.grade(cls, r).key(), reliability);
         List<Alternative> alts = new ArrayList<>();
         for (int i = 0; i < Math.min(6, distinct.size()); i++) {
             Candidate c = distinct.get(i);
