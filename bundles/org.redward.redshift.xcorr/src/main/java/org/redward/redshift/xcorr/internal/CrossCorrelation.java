@@ -125,6 +125,20 @@ final class CrossCorrelation {
         return WORK.get().computeIfAbsent(n, double[]::new);
     }
 
+    private static final ThreadLocal<double[][]> LAG_WORK = ThreadLocal.withInitial(() -> new double[1][0]);
+
+    /**
+     * This thread's array of at least {@code length} for correlations laid out by lag (reused,
+     * grown when needed, separate from {@link #work}); use only its first {@code length} values.
+     */
+    static double[] lagWork(int length) {
+        double[][] holder = LAG_WORK.get();
+        if (holder[0].length < length) {
+            holder[0] = new double[Math.max(length, holder[0].length + holder[0].length / 2)];
+        }
+        return holder[0];
+    }
+
     /** A fitted correlation peak. */
     record Peak(double lag, double height, double r, double fwhmPixels, double sigmaPixels) {
     }
