@@ -33,7 +33,7 @@ import org.redward.spectrum.ObjectClass;
 public final class Scorecard {
 
     /** Success threshold on |dz|/(1+z). */
-    public static final double SUCCESS = 0.001;
+    public static final double SUCCESS = org.redward.api.redshift.GradeCalibration.CORRECT_RELATIVE_ERROR;
     /** Catastrophic threshold on |dz|/(1+z). */
     public static final double CATASTROPHIC = 0.01;
     /** Edges of the S/N bins (median S/N per pixel). */

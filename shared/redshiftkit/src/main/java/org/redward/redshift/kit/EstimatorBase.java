@@ -6,6 +6,7 @@ import java.io.UncheckedIOException;
 import java.util.Map;
 
 import org.redward.api.redshift.EstimationContext;
+import org.redward.api.redshift.GradeCalibration;
 import org.redward.api.redshift.RedshiftEstimator;
 import org.redward.api.redshift.RedshiftSolution;
 import org.redward.api.templates.TemplateSet;
@@ -22,7 +23,7 @@ public abstract class EstimatorBase implements RedshiftEstimator {
 
     private volatile String bundle;
     private volatile String version = "unpackaged";
-    protected final Calibration calibration;
+    protected final GradeCalibration calibration;
 
     /**
      * @param defaultBundle the bundle symbolic name used outside a framework (tests)
@@ -35,7 +36,7 @@ public abstract class EstimatorBase implements RedshiftEstimator {
             if (in == null) {
                 throw new IllegalStateException(getClass().getName() + ": calibration.tsv missing beside the class");
             }
-            calibration = Calibration.read(statistic, in, 0.2);
+            calibration = GradeCalibration.read(statistic, in, 0.2);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

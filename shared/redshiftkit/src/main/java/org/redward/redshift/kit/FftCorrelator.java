@@ -66,6 +66,26 @@ public final class FftCorrelator {
         return c;
     }
 
+    /**
+     * {@code factor * c(k)}, {@code c(k) = sum_i x(i) t(i - k)} at index {@code k mod n}, written
+     * into {@code out} (length n, overwritten; may be a reused work array) and returned. The same
+     * numbers as {@code factor} times {@link #correlate} (to rounding), in one pass over the
+     * spectra and one unscaled inverse transform, without allocating.
+     */
+    public static double[] correlate(double[] xHat, double[] tHat, double factor, double[] out) {
+        int n = xHat.length;
+        double f = factor * 2.0 / n; // the inverse transform's own scale (JTransforms' realInverse with scale = true) folded in
+        out[0] = xHat[0] * tHat[0] * f;
+        out[1] = xHat[1] * tHat[1] * f;
+        for (int k = 2; k < n; k += 2) {
+            double xr = xHat[k], xi = xHat[k + 1], tr = tHat[k], ti = tHat[k + 1];
+            out[k] = (xr * tr + xi * ti) * f;
+            out[k + 1] = (xi * tr - xr * ti) * f;
+        }
+        plan(n).realInverse(out, false);
+        return out;
+    }
+
     /** Multiplies a packed spectrum in place by a real, even filter {@code h(k)} given for k = 0..n/2. */
     public static void filter(double[] aHat, double[] h) {
         int n = aHat.length;

@@ -37,4 +37,29 @@ class FftCorrelatorTest {
         }
         assertEquals(e, FftCorrelator.energy(FftCorrelator.forward(x, n)), 1e-9 * e);
     }
+
+    @Test
+    void scaledCorrelationIntoWorkArrayMatchesTheAllocatingOne() {
+        Random r = new Random(5);
+        int n = 1024;
+        double[] x = new double[700], t = new double[600];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = r.nextGaussian();
+        }
+        for (int i = 0; i < t.length; i++) {
+            t[i] = r.nextGaussian();
+        }
+        double[] xh = FftCorrelator.forward(x, n), th = FftCorrelator.forward(t, n);
+        double[] c = FftCorrelator.correlate(xh, th);
+        double[] work = new double[n];
+        java.util.Arrays.fill(work, 123.0);
+        double[] d = FftCorrelator.correlate(xh, th, 0.25, work);
+        double max = 0;
+        for (double v : c) {
+            max = Math.max(max, Math.abs(v));
+        }
+        for (int k = 0; k < n; k++) {
+            assertEquals(0.25 * c[k], d[k], 1e-12 * max, "index " + k);
+        }
+    }
 }

@@ -17,7 +17,7 @@ import org.redward.api.redshift.RedshiftSolution;
 import org.redward.api.redshift.ScoreCurve;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.TemplateSet;
-import org.redward.redshift.kit.Calibration;
+import org.redward.api.redshift.GradeCalibration;
 import org.redward.redshift.kit.EstimatorBase;
 import org.redward.redshift.kit.FftCorrelator;
 import org.redward.redshift.kit.GriddedSpectrum;
@@ -48,8 +48,8 @@ import org.redward.spectrum.Spectrum;
  * of the residuals' correlation factor (pixels that are not independent; common practice).</li>
  * <li>Alternatives: local minima of every class's curve, at redshifts distinct by more than
  * 1,000 km/s, ranked by the criterion above; deltaScore is their criterion minus the best.</li>
- * <li>Grade: from the gap (delta chi2) to the first alternative through the calibration table
- * {@code calibration.tsv} (see {@link Calibration}).</li>
+ * <li>Grade: from the gap (delta chi2) to the first alternative and the class given, through the
+ * table {@code calibration.tsv} measured on the mock survey (see {@link GradeCalibration}).</li>
  * </ul>
  *
  * Parameters: {@code poly_terms} (3), {@code min_coverage} (0.5), {@code galaxy_z_max} (1.6),
@@ -57,7 +57,8 @@ import org.redward.spectrum.Spectrum;
  */
 @Component(service = RedshiftEstimator.class, property = {
     Provided.ID + "=" + ChiSquareEstimator.ID,
-    Provided.DESCRIPTION + "=chi-square template fitting over a redshift grid (Glazebrook et al. 1998; Bolton et al. 2012)",
+    Provided.DESCRIPTION + "=chi-square template fitting over a redshift grid (Glazebrook et al. 1998; Bolton et al. 2012);"
+            + " grades from delta chi2 per class, calibrated on the mock survey (fraction of |dz|/(1+z) < 0.001)",
     RedshiftEstimator.USES_TEMPLATES + ":Boolean=true"})
 public final class ChiSquareEstimator extends EstimatorBase {
 
@@ -202,7 +203,6 @@ public final class ChiSquareEstimator extends EstimatorBase {
                 classGap = Math.min(classGap, c.criterion() - best.criterion());
             }
         }
-        double reliability = calibration.reliability(gap);
         ObjectClass cls = best.group().objectClass;
         String sub = subclass(gs, best, polyTerms);
         double broad = Double.NaN;
@@ -213,10 +213,11 @@ public final class ChiSquareEstimator extends EstimatorBase {
                 sub = "broadline-with-host";
             }
         }
+        double reliability = calibration.reliability(cls.key(), gap);
         RedshiftSolution.Builder b = RedshiftSolution.builder()
                 .z(z, zErr)
                 .objectClass(cls, sub)
-                .grade(calibration.grade(gap).key(), reliability);
+                .grade(calibration.grade(cls.key(), gap).key(), reliability);
         List<Alternative> alts = new ArrayList<>();
         alts.add(new Alternative(z, zErr, best.chi2(), 0.0, best.group().objectClass, best.group().name));
         for (int i = 1; i < Math.min(6, distinct.size()); i++) {

@@ -79,8 +79,10 @@ public final class ChiSquareBenchmark {
                 "chisq scan, %d px, 4 templates + %d polynomial terms, %d trial z (0<z<1.5, 1e-4 in log10(1+z)), FFT length %d:",
                 s0.size(), polyTerms, shiftHi - shiftLo + 1, n));
         System.out.println(String.format(Locale.ROOT,
-                "  FFT scan %.2f ms per spectrum per core; direct least squares %.0f ms; ratio %.0fx; max relative chi2 difference %.1e",
-                fftMs, directMs, directMs / fftMs, maxDiff));
+                "BENCHMARK chisq scan: FFT %.2f ms per spectrum per core (goal <= 20); direct least squares %.0f ms; ratio %.0fx"
+                        + " (goal >= 30); max relative chi2 difference %.1e; thread CPU time, load average %.2f",
+                fftMs, directMs, directMs / fftMs, maxDiff,
+                java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage()));
 
         ChiSquareEstimator est = new ChiSquareEstimator();
         EstimationContext ctx = EstimationContext.defaults().withTemplates(new StandardTemplateSet());
@@ -99,7 +101,7 @@ public final class ChiSquareBenchmark {
         }
         double estMs = (cpuNanos() - t0) / 1e6 / (3 * raw.size());
         System.out.println(String.format(Locale.ROOT,
-                "chisq estimate() with the whole standard set (galaxies, quasars to z=4, 11 stars): %.1f ms per spectrum per core", estMs));
+                "BENCHMARK chisq estimate() with the whole standard set (galaxies, quasars to z=4, 11 stars): %.1f ms per spectrum per core", estMs));
         System.out.println("(checksum " + (sink != 0) + ")");
     }
 

@@ -104,16 +104,39 @@ final class CrossCorrelation {
         }
     }
 
-    /** Normalised correlation of a prepared spectrum with a prepared template, index k mod n. */
+    /** Normalised correlation of a prepared spectrum with a prepared template, index k mod n (a new array). */
     static double[] correlate(Filtered g, Filtered t) {
-        double[] c = FftCorrelator.correlate(g.hat(), t.hat());
+        return correlate(g, t, new double[g.hat().length]);
+    }
+
+    /**
+     * Normalised correlation into {@code work} (length n, overwritten; reuse it across templates
+     * to avoid allocation), index k mod n; returns {@code work}.
+     */
+    static double[] correlate(Filtered g, Filtered t, double[] work) {
         double norm = Math.sqrt(g.energy() * t.energy());
-        if (norm > 0) {
-            for (int i = 0; i < c.length; i++) {
-                c[i] /= norm;
-            }
+        return FftCorrelator.correlate(g.hat(), t.hat(), norm > 0 ? 1.0 / norm : 1.0, work);
+    }
+
+    private static final ThreadLocal<java.util.Map<Integer, double[]>> WORK = ThreadLocal.withInitial(java.util.HashMap::new);
+
+    /** This thread's work array of length n (reused; never hand it to another thread). */
+    static double[] work(int n) {
+        return WORK.get().computeIfAbsent(n, double[]::new);
+    }
+
+    private static final ThreadLocal<double[][]> LAG_WORK = ThreadLocal.withInitial(() -> new double[1][0]);
+
+    /**
+     * This thread's array of at least {@code length} for correlations laid out by lag (reused,
+     * grown when needed, separate from {@link #work}); use only its first {@code length} values.
+     */
+    static double[] lagWork(int length) {
+        double[][] holder = LAG_WORK.get();
+        if (holder[0].length < length) {
+            holder[0] = new double[Math.max(length, holder[0].length + holder[0].length / 2)];
         }
-        return c;
+        return holder[0];
     }
 
     /** A fitted correlation peak. */

@@ -17,7 +17,7 @@ import org.redward.api.redshift.RedshiftSolution;
 import org.redward.api.redshift.ScoreCurve;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.TemplateSet;
-import org.redward.redshift.kit.Calibration;
+import org.redward.api.redshift.GradeCalibration;
 import org.redward.redshift.kit.EstimatorBase;
 import org.redward.redshift.kit.FftCorrelator;
 import org.redward.redshift.kit.GriddedSpectrum;
@@ -34,13 +34,15 @@ import org.redward.spectrum.Spectrum;
  * template with the highest r statistic gives the redshift and the class; its other peaks and the
  * best peaks of the other templates (distinct by more than 1,000 km/s) are the alternatives, each
  * with its r. The error is the Kurtz & Mink (1998, PASP 110, 934) form (3/8) w / (1 + r), w the
- * FWHM of the correlation peak. The grade comes from r through {@code calibration.tsv}.
+ * FWHM of the correlation peak. The grade comes from r and the class given, through the table
+ * {@code calibration.tsv} measured on the mock survey (see {@link GradeCalibration}).
  *
  * <p>Thread-safe and deterministic; never throws for bad data.
  */
 @Component(service = RedshiftEstimator.class, property = {
     Provided.ID + "=" + CrossCorrelationEstimator.ID,
-    Provided.DESCRIPTION + "=Fourier cross-correlation with each template (Tonry & Davis 1979)",
+    Provided.DESCRIPTION + "=Fourier cross-correlation with each template (Tonry & Davis 1979);"
+            + " grades from r per class, calibrated on the mock survey (fraction of |dz|/(1+z) < 0.001)",
     RedshiftEstimator.USES_TEMPLATES + ":Boolean=true"})
 public final class CrossCorrelationEstimator extends EstimatorBase {
 
@@ -50,7 +52,8 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
     static final int PEAKS_PER_TEMPLATE = 5;
 
     private final TemplateBank.Cache<TemplateBank> banks = new TemplateBank.Cache<>(4);
-    private final TemplateBank.Cache<CrossCorrelation.Filtered> transforms = new TemplateBank.Cache<>(128);
+    /** Per template set (id|version|checksum): per FFT length, the filtered transform of each template of the bank, by index. */
+    private final TemplateBank.Cache<Map<Integer, CrossCorrelation.Filtered[]>> transforms = new TemplateBank.Cache<>(4);
 
     public CrossCorrelationEstimator() {
         super("org.redward.redshift.xcorr", "r");
@@ -66,22 +69,23 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
         return ID;
     }
 
-    /** One correlation peak of one template. */
+    /**
+     * One correlation peak of one template; {@code searched} is the template's correlation over the
+     * searched range (shared by the template's candidates), its first value at grid shift {@code firstShift}.
+     */
     private record Candidate(GriddedTemplate template, CrossCorrelation.Peak peak, double shift, double z, double zError,
-            double[] cc, int from, int to, long lagToShift) {
+            double[] searched, long firstShift) {
 
         /** The correlation over the searched range, for display. */
         ScoreCurve curve() {
-            double[] z = new double[to - from + 1];
-            double[] c = new double[z.length];
+            double[] z = new double[searched.length];
             double ratio = Math.pow(10.0, LOG10_STEP);
-            double onePlusZ = Math.pow(10.0, (from + lagToShift) * LOG10_STEP);
-            for (int q = from; q <= to; q++) {
-                z[q - from] = onePlusZ - 1;
-                c[q - from] = cc[q];
+            double onePlusZ = Math.pow(10.0, firstShift * LOG10_STEP);
+            for (int q = 0; q < z.length; q++) {
+                z[q] = onePlusZ - 1;
                 onePlusZ *= ratio;
             }
-            return new ScoreCurve(z, c, "xcorr_normalised", false);
+            return new ScoreCurve(z, searched.clone(), "xcorr_normalised", false);
         }
     }
 
@@ -105,7 +109,10 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
             return failed("no usable pixels (fewer than 20 unmasked pixels with finite flux and positive inverse variance)", provenance);
         }
         String checksum = set.checksum();
-        TemplateBank bank = banks.get(set.id() + "|" + set.version() + "|" + checksum, k -> TemplateBank.of(set, LOG10_STEP));
+        String bankKey = set.id() + "|" + set.version() + "|" + checksum;
+        TemplateBank bank = banks.get(bankKey, k -> TemplateBank.of(set, LOG10_STEP));
+        Map<Integer, CrossCorrelation.Filtered[]> transformsByLength = transforms.get(bankKey,
+                k -> new java.util.concurrent.ConcurrentHashMap<>());
         if (bank.templates.isEmpty()) {
             return failed("template set " + set.id() + " has no usable template"
                     + (bank.rejected.isEmpty() ? "" : " (" + String.join("; ", bank.rejected) + ")"), provenance);
@@ -113,7 +120,8 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
         double[] g = CrossCorrelation.prepare(gs.flux, gs.weight);
         Map<Integer, CrossCorrelation.Filtered> spectrumHats = new HashMap<>();
         List<Candidate> all = new ArrayList<>();
-        for (GriddedTemplate t : bank.templates) {
+        for (int ti = 0; ti < bank.templates.size(); ti++) {
+            GriddedTemplate t = bank.templates.get(ti);
             long[] shifts = Shifts.range(SearchRanges.of(t.template.objectClass(), ctx), gs.startIndex, gs.size(), t.startIndex,
                     t.size(), LOG10_STEP);
             if (shifts[0] > shifts[1]) {
@@ -127,29 +135,42 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
                 return failed("the spectrum has no structure left after continuum removal and filtering (flat or constant flux)",
                         provenance);
             }
-            CrossCorrelation.Filtered th = transforms.get(checksum + "|" + t.template.id() + "|" + n,
-                    k -> CrossCorrelation.Filtered.of(CrossCorrelation.prepare(t.flux, coveredWeights(t)), n));
+            CrossCorrelation.Filtered[] slots = transformsByLength.computeIfAbsent(n, nn -> new CrossCorrelation.Filtered[bank.templates.size()]);
+            CrossCorrelation.Filtered th = slots[ti];
+            if (th == null) { // a race computes the same immutable value twice; harmless
+                th = CrossCorrelation.Filtered.of(CrossCorrelation.prepare(t.flux, coveredWeights(t)), n);
+                slots[ti] = th;
+            }
             if (!(th.energy() > 0)) {
                 continue;
             }
-            double[] c = CrossCorrelation.correlate(gh, th);
+            double[] c = CrossCorrelation.correlate(gh, th, CrossCorrelation.work(n));
             // lay the wrap-free lags out contiguously: index q <-> lag k = validLo + q
             int validLo = gs.size() - n, validHi = n - t.size();
-            double[] cc = new double[validHi - validLo + 1];
-            for (int q = 0; q < cc.length; q++) {
-                cc[q] = c[Math.floorMod(validLo + q, n)];
+            int lags = validHi - validLo + 1;
+            double[] cc = CrossCorrelation.lagWork(lags); // this thread's, reused (first `lags` values): copy what must outlive the loop
+            for (int q = 0, lag = validLo; q < lags;) { // cc[q] = c[(validLo + q) mod n], in contiguous runs
+                int at = Math.floorMod(lag, n);
+                int len = Math.min(lags - q, n - at);
+                System.arraycopy(c, at, cc, q, len);
+                q += len;
+                lag += len;
             }
             int from = kLo - validLo, to = kHi - validLo;
             List<Integer> maxima = Peaks.maxima(cc, from, to);
             int taken = 0;
+            double[] searched = null;
             for (int q : maxima) {
                 if (taken >= PEAKS_PER_TEMPLATE || !(cc[q] > 0)) {
                     break;
                 }
-                CrossCorrelation.Peak p = CrossCorrelation.fit(cc, q, 0, cc.length - 1);
+                CrossCorrelation.Peak p = CrossCorrelation.fit(cc, q, 0, lags - 1);
                 double shift = p.lag() + validLo + offset;
                 double z = Shifts.z(shift, LOG10_STEP);
-                all.add(new Candidate(t, p, shift, z, Shifts.zError(z, p.sigmaPixels(), LOG10_STEP), cc, from, to, validLo + offset));
+                if (searched == null) {
+                    searched = java.util.Arrays.copyOfRange(cc, from, to + 1);
+                }
+                all.add(new Candidate(t, p, shift, z, Shifts.zError(z, p.sigmaPixels(), LOG10_STEP), searched, from + validLo + offset));
                 taken++;
             }
         }
@@ -168,11 +189,12 @@ public final class CrossCorrelationEstimator extends EstimatorBase {
         }
         Candidate best = distinct.get(0);
         double r = best.peak().r();
-        double reliability = calibration.reliability(r);
+        String cls = best.template().template.objectClass().key();
+        double reliability = calibration.reliability(cls, r);
         RedshiftSolution.Builder b = RedshiftSolution.builder()
                 .z(best.z(), best.zError())
                 .objectClass(best.template().template.objectClass(), best.template().template.subclass())
-                .grade(calibration.grade(r).key(), reliability);
+                .grade(calibration.grade(cls, r).key(), reliability);
         List<Alternative> alts = new ArrayList<>();
         for (int i = 0; i < Math.min(6, distinct.size()); i++) {
             Candidate c = distinct.get(i);
