@@ -63,6 +63,17 @@ public final class Main {
     }
 
     static int run(String[] args, PrintStream err) throws Exception {
+        StartupTrace trace = StartupTrace.fromSystemProperty();
+        PrintStream traceOut = err;
+        try {
+            return run(args, err, trace);
+        } finally {
+            trace.mark("storage deleted");
+            trace.print(traceOut);
+        }
+    }
+
+    private static int run(String[] args, PrintStream err, StartupTrace trace) throws Exception {
         Path cwd = Paths.get("").toAbsolutePath();
         Options options;
         try {
@@ -114,7 +125,9 @@ public final class Main {
         FrameworkFactory factory = ServiceLoader.load(FrameworkFactory.class).iterator().next();
         Framework framework = factory.newFramework(fw);
         try {
+            trace.mark("framework created");
             framework.start();
+            trace.mark("framework started");
             BundleContext context = framework.getBundleContext();
             MainThreadExecutor mainThread = new MainThreadExecutor();
             Hashtable<String, Object> props = new Hashtable<>();
@@ -122,12 +135,16 @@ public final class Main {
             context.registerService(Executor.class, mainThread, props);
 
             List<Bundle> installed = install(context, folders, options.debug, err);
-            startAll(installed, options.debug, err);
-            return dispatch(context, options, mainThread, err);
+            trace.mark("bundles installed (" + installed.size() + ")");
+            startAll(installed, options.debug, err, trace);
+            trace.mark("bundles started");
+            return dispatch(context, options, mainThread, err, trace);
         } finally {
+            trace.mark("command done");
             try {
                 framework.stop();
                 framework.waitForStop(10_000);
+                trace.mark("framework stopped");
             } catch (Exception e) {
                 if (options.debug) {
                     e.printStackTrace(err);
@@ -137,8 +154,8 @@ public final class Main {
         }
     }
 
-    private static int dispatch(BundleContext context, Options options, MainThreadExecutor mainThread, PrintStream err)
-            throws Exception {
+    private static int dispatch(BundleContext context, Options options, MainThreadExecutor mainThread, PrintStream err,
+            StartupTrace trace) throws Exception {
         ServiceTracker<Object, Object> tracker = new ServiceTracker<>(context, FrameworkUtil.createFilter(CLI_FILTER), null);
         tracker.open();
         try {
@@ -147,6 +164,7 @@ public final class Main {
                 err.println("redward: the command dispatcher (bundle org.redward.cli) is not running; the product is incomplete");
                 return 1;
             }
+            trace.mark("dispatcher found");
             @SuppressWarnings("unchecked")
             Function<String[], Integer> function = (Function<String[], Integer>) cli;
             String[] commandLine = options.commandLine.toArray(new String[0]);
@@ -224,13 +242,16 @@ public final class Main {
         return out;
     }
 
-    static void startAll(List<Bundle> bundles, boolean debug, PrintStream err) {
+    static void startAll(List<Bundle> bundles, boolean debug, PrintStream err, StartupTrace trace) {
         for (Bundle b : bundles) {
             if (b.getHeaders().get(Constants.FRAGMENT_HOST) != null) {
                 continue;
             }
             try {
                 b.start();
+                if (trace.on()) {
+                    trace.mark("  started " + b.getSymbolicName());
+                }
             } catch (BundleException | RuntimeException e) {
                 err.println("redward: bundle " + b.getSymbolicName() + " " + b.getVersion() + " did not start: " + oneLine(e));
                 if (debug) {

@@ -1,0 +1,62 @@
+package org.redward.launcher;
+
+import java.io.PrintStream;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * Wall-clock marks of the launcher's phases, printed to standard error at exit when the system
+ * property {@code redward.trace.startup} is {@code true} (set it through
+ * {@code REDWARD_JAVA_OPTS=-Dredward.trace.startup=true}). Costs one {@code nanoTime} per mark
+ * otherwise. Times are milliseconds since the JVM started (as the operating system saw it) and
+ * since the previous mark. Not thread-safe: the launcher's main thread only.
+ */
+final class StartupTrace {
+
+    private final boolean on;
+    private final long originNanos;
+    private final long jvmToMainMillis;
+    private final List<String> names = new ArrayList<>();
+    private final List<Long> marks = new ArrayList<>();
+
+    StartupTrace(boolean on) {
+        this.on = on;
+        this.originNanos = System.nanoTime();
+        long toMain = -1;
+        if (on) {
+            toMain = ProcessHandle.current().info().startInstant()
+                    .map(i -> System.currentTimeMillis() - i.toEpochMilli()).orElse(-1L);
+        }
+        this.jvmToMainMillis = toMain;
+    }
+
+    static StartupTrace fromSystemProperty() {
+        return new StartupTrace(Boolean.getBoolean("redward.trace.startup"));
+    }
+
+    boolean on() {
+        return on;
+    }
+
+    void mark(String name) {
+        if (on) {
+            names.add(name);
+            marks.add(System.nanoTime());
+        }
+    }
+
+    void print(PrintStream out) {
+        if (!on) {
+            return;
+        }
+        out.printf(Locale.ROOT, "startup: %6d ms  process start -> launcher main%n", jvmToMainMillis);
+        long previous = originNanos;
+        for (int i = 0; i < names.size(); i++) {
+            long t = marks.get(i);
+            out.printf(Locale.ROOT, "startup: %6d ms  +%5d ms  %s%n", jvmToMainMillis + (t - originNanos) / 1_000_000,
+                    (t - previous) / 1_000_000, names.get(i));
+            previous = t;
+        }
+    }
+}
