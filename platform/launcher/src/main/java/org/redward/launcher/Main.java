@@ -21,7 +21,6 @@ import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
 import java.util.jar.JarFile;
 import java.util.jar.Manifest;
-import java.util.stream.Stream;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
@@ -102,7 +101,7 @@ public final class Main {
         }
         folders.addAll(options.dropInFolders);
 
-        Path storage = Files.createTempDirectory("redward-felix-");
+        Path storage = Files.createTempDirectory(storageParent(), "redward-felix-");
         Map<String, String> fw = new HashMap<>();
         fw.put(Constants.FRAMEWORK_STORAGE, storage.toString());
         fw.put(Constants.FRAMEWORK_STORAGE_CLEAN, Constants.FRAMEWORK_STORAGE_CLEAN_ONFIRSTINIT);
@@ -295,11 +294,46 @@ public final class Main {
         return p;
     }
 
-    private static void deleteTree(Path root) {
-        try (Stream<Path> s = Files.walk(root)) {
-            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-        } catch (IOException e) {
-            // a leftover temporary folder is harmless
+    /**
+     * Where this run's framework storage folder goes: the property {@code redward.storage.dir} if
+     * set, else a memory-backed folder if there is one ({@code $XDG_RUNTIME_DIR}, then
+     * {@code /dev/shm}), else the temporary folder. The storage is small (a few files per bundle,
+     * plus the libraries some bundles embed), but a disk under load took 0.1-0.3 s just to delete
+     * it at exit; on a memory-backed folder creating and deleting it is nearly free.
+     */
+    static Path storageParent() {
+        String configured = System.getProperty("redward.storage.dir");
+        if (configured != null && !configured.isBlank()) {
+            return Paths.get(configured);
         }
+        String runtime = System.getenv("XDG_RUNTIME_DIR");
+        for (String candidate : new String[] {runtime, "/dev/shm"}) {
+            if (candidate != null && !candidate.isBlank()) {
+                Path p = Paths.get(candidate);
+                if (Files.isDirectory(p) && Files.isWritable(p)) {
+                    return p;
+                }
+            }
+        }
+        return Paths.get(System.getProperty("java.io.tmpdir"));
+    }
+
+    /** Deletes a folder tree (plain recursion: no streams or lambdas, which cost time to set up at exit). */
+    private static void deleteTree(Path root) {
+        deleteTree(root.toFile());
+    }
+
+    private static void deleteTree(java.io.File f) {
+        java.io.File[] children = f.listFiles();
+        if (children != null) {
+            for (java.io.File c : children) {
+                if (!Files.isSymbolicLink(c.toPath())) {
+                    deleteTree(c);
+                } else {
+                    c.delete();
+                }
+            }
+        }
+        f.delete(); // a leftover temporary file is harmless
     }
 }

@@ -9,8 +9,8 @@ import java.util.Locale;
  * Wall-clock marks of the launcher's phases, printed to standard error at exit when the system
  * property {@code redward.trace.startup} is {@code true} (set it through
  * {@code REDWARD_JAVA_OPTS=-Dredward.trace.startup=true}). Costs one {@code nanoTime} per mark
- * otherwise. Times are milliseconds since the JVM started (as the operating system saw it) and
- * since the previous mark. Not thread-safe: the launcher's main thread only.
+ * otherwise. Times are milliseconds since the JVM started (as the JVM recorded it) and since the
+ * previous mark. Not thread-safe: the launcher's main thread only.
  */
 final class StartupTrace {
 
@@ -25,8 +25,10 @@ final class StartupTrace {
         this.originNanos = System.nanoTime();
         long toMain = -1;
         if (on) {
-            toMain = ProcessHandle.current().info().startInstant()
-                    .map(i -> System.currentTimeMillis() - i.toEpochMilli()).orElse(-1L);
+            // the JVM's own record of its start (the operating system's process start time is
+            // only known to the second here); loading the management classes costs a little,
+            // paid only when tracing
+            toMain = System.currentTimeMillis() - java.lang.management.ManagementFactory.getRuntimeMXBean().getStartTime();
         }
         this.jvmToMainMillis = toMain;
     }
@@ -50,7 +52,7 @@ final class StartupTrace {
         if (!on) {
             return;
         }
-        out.printf(Locale.ROOT, "startup: %6d ms  process start -> launcher main%n", jvmToMainMillis);
+        out.printf(Locale.ROOT, "startup: %6d ms  JVM start -> launcher main%n", jvmToMainMillis);
         long previous = originNanos;
         for (int i = 0; i < names.size(); i++) {
             long t = marks.get(i);
