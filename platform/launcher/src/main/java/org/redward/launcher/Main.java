@@ -29,6 +29,7 @@ import org.osgi.framework.Constants;
 import org.osgi.framework.FrameworkUtil;
 import org.osgi.framework.launch.Framework;
 import org.osgi.framework.launch.FrameworkFactory;
+import org.osgi.framework.wiring.FrameworkWiring;
 import org.osgi.util.tracker.ServiceTracker;
 
 /**
@@ -135,6 +136,10 @@ public final class Main {
 
             List<Bundle> installed = install(context, folders, options.debug, err);
             trace.mark("bundles installed (" + installed.size() + ")");
+            // one resolution for all the bundles instead of one per start (the outcome is the same:
+            // a bundle that cannot resolve stays installed and its start reports why)
+            framework.adapt(FrameworkWiring.class).resolveBundles(installed);
+            trace.mark("bundles resolved");
             startAll(installed, options.debug, err, trace);
             trace.mark("bundles started");
             return dispatch(context, options, mainThread, err, trace);
