@@ -33,11 +33,12 @@ public final class ProductFacts implements PlatformInfo {
 
     private BundleContext context;
     private String version;
-    private volatile DigestCache digests;
+    private DigestCache digests;
 
     @Activate
     void activate(BundleContext bc) {
         this.context = bc;
+        this.digests = DigestCache.open(DigestCache.defaultFolder(bc.getProperty(CACHE_DIR)));
         String v = bc.getProperty("redward.version");
         this.version = v == null || v.equals("unknown") ? versionOf(Path.of(String.valueOf(bc.getProperty("redward.home")))) : v;
     }
@@ -53,26 +54,12 @@ public final class ProductFacts implements PlatformInfo {
         for (Bundle b : context.getBundles()) {
             Path jar = jarOf(b);
             String origin = b.getBundleId() == 0 ? "system" : jar == null ? b.getLocation() : String.valueOf(jar.getParent());
-            String sha = jar == null ? "" : digests().digest(jar, ProductFacts::digest);
+            String sha = jar == null ? "" : digests.digest(jar, ProductFacts::digest);
             out.add(new BundleRecord(b.getBundleId(), String.valueOf(b.getSymbolicName()), b.getVersion().toString(),
                     stateName(b.getState()), origin, sha));
         }
-        digests().save();
+        digests.save();
         return out;
-    }
-
-    private DigestCache digests() {
-        DigestCache d = digests;
-        if (d == null) {
-            synchronized (this) {
-                d = digests;
-                if (d == null) {
-                    d = DigestCache.open(DigestCache.defaultFolder(context.getProperty(CACHE_DIR)));
-                    digests = d;
-                }
-            }
-        }
-        return d;
     }
 
     /** The jar a bundle was installed from, if it was a file. */
