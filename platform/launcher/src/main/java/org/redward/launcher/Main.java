@@ -21,7 +21,6 @@ import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Function;
 import java.util.jar.JarFile;
 import java.util.jar.Manifest;
-import java.util.stream.Stream;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
@@ -30,6 +29,7 @@ import org.osgi.framework.Constants;
 import org.osgi.framework.FrameworkUtil;
 import org.osgi.framework.launch.Framework;
 import org.osgi.framework.launch.FrameworkFactory;
+import org.osgi.framework.wiring.FrameworkWiring;
 import org.osgi.util.tracker.ServiceTracker;
 
 /**
@@ -63,6 +63,17 @@ public final class Main {
     }
 
     static int run(String[] args, PrintStream err) throws Exception {
+        StartupTrace trace = StartupTrace.fromSystemProperty();
+        PrintStream traceOut = err;
+        try {
+            return run(args, err, trace);
+        } finally {
+            trace.mark("storage deleted");
+            trace.print(traceOut);
+        }
+    }
+
+    private static int run(String[] args, PrintStream err, StartupTrace trace) throws Exception {
         Path cwd = Paths.get("").toAbsolutePath();
         Options options;
         try {
@@ -91,7 +102,7 @@ public final class Main {
         }
         folders.addAll(options.dropInFolders);
 
-        Path storage = Files.createTempDirectory("redward-felix-");
+        Path storage = Files.createTempDirectory(storageParent(), "redward-felix-");
         Map<String, String> fw = new HashMap<>();
         fw.put(Constants.FRAMEWORK_STORAGE, storage.toString());
         fw.put(Constants.FRAMEWORK_STORAGE_CLEAN, Constants.FRAMEWORK_STORAGE_CLEAN_ONFIRSTINIT);
@@ -114,7 +125,9 @@ public final class Main {
         FrameworkFactory factory = ServiceLoader.load(FrameworkFactory.class).iterator().next();
         Framework framework = factory.newFramework(fw);
         try {
+            trace.mark("framework created");
             framework.start();
+            trace.mark("framework started");
             BundleContext context = framework.getBundleContext();
             MainThreadExecutor mainThread = new MainThreadExecutor();
             Hashtable<String, Object> props = new Hashtable<>();
@@ -122,12 +135,20 @@ public final class Main {
             context.registerService(Executor.class, mainThread, props);
 
             List<Bundle> installed = install(context, folders, options.debug, err);
-            startAll(installed, options.debug, err);
-            return dispatch(context, options, mainThread, err);
+            trace.mark("bundles installed (" + installed.size() + ")");
+            // one resolution for all the bundles instead of one per start (the outcome is the same:
+            // a bundle that cannot resolve stays installed and its start reports why)
+            framework.adapt(FrameworkWiring.class).resolveBundles(installed);
+            trace.mark("bundles resolved");
+            startAll(installed, options.debug, err, trace);
+            trace.mark("bundles started");
+            return dispatch(context, options, mainThread, err, trace);
         } finally {
+            trace.mark("command done");
             try {
                 framework.stop();
                 framework.waitForStop(10_000);
+                trace.mark("framework stopped");
             } catch (Exception e) {
                 if (options.debug) {
                     e.printStackTrace(err);
@@ -137,8 +158,8 @@ public final class Main {
         }
     }
 
-    private static int dispatch(BundleContext context, Options options, MainThreadExecutor mainThread, PrintStream err)
-            throws Exception {
+    private static int dispatch(BundleContext context, Options options, MainThreadExecutor mainThread, PrintStream err,
+            StartupTrace trace) throws Exception {
         ServiceTracker<Object, Object> tracker = new ServiceTracker<>(context, FrameworkUtil.createFilter(CLI_FILTER), null);
         tracker.open();
         try {
@@ -147,6 +168,7 @@ public final class Main {
                 err.println("redward: the command dispatcher (bundle org.redward.cli) is not running; the product is incomplete");
                 return 1;
             }
+            trace.mark("dispatcher found");
             @SuppressWarnings("unchecked")
             Function<String[], Integer> function = (Function<String[], Integer>) cli;
             String[] commandLine = options.commandLine.toArray(new String[0]);
@@ -224,13 +246,16 @@ public final class Main {
         return out;
     }
 
-    static void startAll(List<Bundle> bundles, boolean debug, PrintStream err) {
+    static void startAll(List<Bundle> bundles, boolean debug, PrintStream err, StartupTrace trace) {
         for (Bundle b : bundles) {
             if (b.getHeaders().get(Constants.FRAGMENT_HOST) != null) {
                 continue;
             }
             try {
                 b.start();
+                if (trace.on()) {
+                    trace.mark("  started " + b.getSymbolicName());
+                }
             } catch (BundleException | RuntimeException e) {
                 err.println("redward: bundle " + b.getSymbolicName() + " " + b.getVersion() + " did not start: " + oneLine(e));
                 if (debug) {
@@ -274,11 +299,46 @@ public final class Main {
         return p;
     }
 
-    private static void deleteTree(Path root) {
-        try (Stream<Path> s = Files.walk(root)) {
-            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-        } catch (IOException e) {
-            // a leftover temporary folder is harmless
+    /**
+     * Where this run's framework storage folder goes: the property {@code redward.storage.dir} if
+     * set, else a memory-backed folder if there is one ({@code $XDG_RUNTIME_DIR}, then
+     * {@code /dev/shm}), else the temporary folder. The storage is small (a few files per bundle,
+     * plus the libraries some bundles embed), but a disk under load took 0.1-0.3 s just to delete
+     * it at exit; on a memory-backed folder creating and deleting it is nearly free.
+     */
+    static Path storageParent() {
+        String configured = System.getProperty("redward.storage.dir");
+        if (configured != null && !configured.isBlank()) {
+            return Paths.get(configured);
         }
+        String runtime = System.getenv("XDG_RUNTIME_DIR");
+        for (String candidate : new String[] {runtime, "/dev/shm"}) {
+            if (candidate != null && !candidate.isBlank()) {
+                Path p = Paths.get(candidate);
+                if (Files.isDirectory(p) && Files.isWritable(p)) {
+                    return p;
+                }
+            }
+        }
+        return Paths.get(System.getProperty("java.io.tmpdir"));
+    }
+
+    /** Deletes a folder tree (plain recursion: no streams or lambdas, which cost time to set up at exit). */
+    private static void deleteTree(Path root) {
+        deleteTree(root.toFile());
+    }
+
+    private static void deleteTree(java.io.File f) {
+        java.io.File[] children = f.listFiles();
+        if (children != null) {
+            for (java.io.File c : children) {
+                if (!Files.isSymbolicLink(c.toPath())) {
+                    deleteTree(c);
+                } else {
+                    c.delete();
+                }
+            }
+        }
+        f.delete(); // a leftover temporary file is harmless
     }
 }

@@ -144,7 +144,7 @@ public final class PluginsCommand implements Command {
                 bad++;
                 continue;
             }
-            String actual = ProductFacts.sha256(jar);
+            String actual = ProductFacts.digest(jar);
             if (!actual.equals(e.getValue())) {
                 ctx.out().println("CHANGED  " + e.getKey() + "  (recorded " + e.getValue().substring(0, 12) + "..., now " + actual.substring(0, Math.min(12, actual.length())) + "...)");
                 bad++;

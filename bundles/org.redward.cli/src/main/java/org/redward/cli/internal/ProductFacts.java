@@ -12,9 +12,7 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.Properties;
-import java.util.concurrent.ConcurrentHashMap;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
@@ -24,20 +22,23 @@ import org.redward.api.commands.PlatformInfo;
 
 /**
  * Facts about the running product for {@code plugins} and provenance: the product version and
- * every installed bundle with its origin folder and the SHA-256 of its jar (computed on first
- * request and cached per jar path and modification time).
+ * every installed bundle with its origin folder and the SHA-256 of its jar (kept between runs
+ * by {@link DigestCache} while the jar's path, size and modification time are unchanged).
  */
 @Component(service = PlatformInfo.class)
 public final class ProductFacts implements PlatformInfo {
 
-    private static final Map<String, String> DIGESTS = new ConcurrentHashMap<>();
+    /** Framework property naming the folder of the digest cache (default: see {@link DigestCache#defaultFolder}). */
+    static final String CACHE_DIR = "redward.cache.dir";
 
     private BundleContext context;
     private String version;
+    private DigestCache digests;
 
     @Activate
     void activate(BundleContext bc) {
         this.context = bc;
+        this.digests = DigestCache.open(DigestCache.defaultFolder(bc.getProperty(CACHE_DIR)));
         String v = bc.getProperty("redward.version");
         this.version = v == null || v.equals("unknown") ? versionOf(Path.of(String.valueOf(bc.getProperty("redward.home")))) : v;
     }
@@ -53,10 +54,11 @@ public final class ProductFacts implements PlatformInfo {
         for (Bundle b : context.getBundles()) {
             Path jar = jarOf(b);
             String origin = b.getBundleId() == 0 ? "system" : jar == null ? b.getLocation() : String.valueOf(jar.getParent());
-            String sha = jar == null ? "" : sha256(jar);
+            String sha = jar == null ? "" : digests.digest(jar, ProductFacts::digest);
             out.add(new BundleRecord(b.getBundleId(), String.valueOf(b.getSymbolicName()), b.getVersion().toString(),
                     stateName(b.getState()), origin, sha));
         }
+        digests.save();
         return out;
     }
 
@@ -76,16 +78,8 @@ public final class ProductFacts implements PlatformInfo {
         }
     }
 
-    static String sha256(Path file) {
-        try {
-            String key = file + "@" + Files.getLastModifiedTime(file).toMillis();
-            return DIGESTS.computeIfAbsent(key, k -> digest(file));
-        } catch (IOException e) {
-            return "";
-        }
-    }
-
-    private static String digest(Path file) {
+    /** The SHA-256 of the file's bytes, read now (hex); empty if it cannot be read. */
+    static String digest(Path file) {
         try (InputStream in = new DigestInputStream(Files.newInputStream(file), MessageDigest.getInstance("SHA-256"))) {
             byte[] buf = new byte[1 << 16];
             DigestInputStream d = (DigestInputStream) in;

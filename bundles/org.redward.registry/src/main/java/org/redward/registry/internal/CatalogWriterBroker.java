@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class CatalogWriterBroker extends Tracked<CatalogWriter> implements
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(CatalogWriter service, ServiceReference<CatalogWriter> ref) {
+    @Reference(service = CatalogWriter.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<CatalogWriter> service, ServiceReference<CatalogWriter> ref) {
         add(service, ref);
     }
 
-    void unbind(CatalogWriter service, ServiceReference<CatalogWriter> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<CatalogWriter> ref) {
+        remove(ref);
     }
 }

@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class CosmologyBroker extends Tracked<CosmologySet> implements Cosm
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(CosmologySet service, ServiceReference<CosmologySet> ref) {
+    @Reference(service = CosmologySet.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<CosmologySet> service, ServiceReference<CosmologySet> ref) {
         add(service, ref);
     }
 
-    void unbind(CosmologySet service, ServiceReference<CosmologySet> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<CosmologySet> ref) {
+        remove(ref);
     }
 }

@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class EstimatorBroker extends Tracked<RedshiftEstimator> implements
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(RedshiftEstimator service, ServiceReference<RedshiftEstimator> ref) {
+    @Reference(service = RedshiftEstimator.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<RedshiftEstimator> service, ServiceReference<RedshiftEstimator> ref) {
         add(service, ref);
     }
 
-    void unbind(RedshiftEstimator service, ServiceReference<RedshiftEstimator> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<RedshiftEstimator> ref) {
+        remove(ref);
     }
 }

@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class LineListBroker extends Tracked<LineList> implements LineListR
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(LineList service, ServiceReference<LineList> ref) {
+    @Reference(service = LineList.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<LineList> service, ServiceReference<LineList> ref) {
         add(service, ref);
     }
 
-    void unbind(LineList service, ServiceReference<LineList> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<LineList> ref) {
+        remove(ref);
     }
 }

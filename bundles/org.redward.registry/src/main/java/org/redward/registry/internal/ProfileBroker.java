@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class ProfileBroker extends Tracked<InstrumentProfile> implements P
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(InstrumentProfile service, ServiceReference<InstrumentProfile> ref) {
+    @Reference(service = InstrumentProfile.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<InstrumentProfile> service, ServiceReference<InstrumentProfile> ref) {
         add(service, ref);
     }
 
-    void unbind(InstrumentProfile service, ServiceReference<InstrumentProfile> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<InstrumentProfile> ref) {
+        remove(ref);
     }
 }

@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class ReaderBroker extends Tracked<SpectrumReader> implements Reade
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(SpectrumReader service, ServiceReference<SpectrumReader> ref) {
+    @Reference(service = SpectrumReader.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<SpectrumReader> service, ServiceReference<SpectrumReader> ref) {
         add(service, ref);
     }
 
-    void unbind(SpectrumReader service, ServiceReference<SpectrumReader> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<SpectrumReader> ref) {
+        remove(ref);
     }
 }

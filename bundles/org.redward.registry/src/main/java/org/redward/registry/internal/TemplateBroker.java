@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class TemplateBroker extends Tracked<TemplateSet> implements Templa
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(TemplateSet service, ServiceReference<TemplateSet> ref) {
+    @Reference(service = TemplateSet.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<TemplateSet> service, ServiceReference<TemplateSet> ref) {
         add(service, ref);
     }
 
-    void unbind(TemplateSet service, ServiceReference<TemplateSet> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<TemplateSet> ref) {
+        remove(ref);
     }
 }

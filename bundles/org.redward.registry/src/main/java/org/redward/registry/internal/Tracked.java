@@ -9,12 +9,16 @@ import java.util.concurrent.CopyOnWriteArrayList;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.redward.api.registry.Provided;
 import org.redward.api.registry.ProviderRegistry;
 
 /**
  * The shared body of every registry: a thread-safe list of providers kept up to date by DS
- * dynamic references. Providers without an id are ignored (and named in {@link #ignored()}).
+ * dynamic references. Providers are listed from their service properties; a provider's service
+ * object is obtained only when a consumer asks for it ({@link Provided#service()}), so listing
+ * never activates a provider (DS releases what was obtained when the provider goes away).
+ * Providers without an id are ignored.
  * When two providers share an id, the one with the higher service ranking (then the lower
  * service id) wins; the other stays listed under {@link #shadowed()}.
  */
@@ -25,7 +29,7 @@ public abstract class Tracked<T> implements ProviderRegistry<T> {
     private record Entry<T>(ServiceReference<?> ref, Provided<T> provided) {
     }
 
-    protected final void add(T service, ServiceReference<?> ref) {
+    protected final void add(ComponentServiceObjects<T> service, ServiceReference<?> ref) {
         Object id = ref.getProperty(Provided.ID);
         if (id == null) {
             return;
@@ -38,11 +42,11 @@ public abstract class Tracked<T> implements ProviderRegistry<T> {
         String bsn = b == null ? "?" : b.getSymbolicName();
         String version = b == null ? "?" : b.getVersion().toString();
         Object description = ref.getProperty(Provided.DESCRIPTION);
-        entries.add(new Entry<>(ref, Provided.of(String.valueOf(id), service, bsn, version,
+        entries.add(new Entry<>(ref, Provided.lazy(String.valueOf(id), service::getService, bsn, version,
                 description == null ? "" : String.valueOf(description), props)));
     }
 
-    protected final void remove(T service, ServiceReference<?> ref) {
+    protected final void remove(ServiceReference<?> ref) {
         entries.removeIf(e -> e.ref().equals(ref));
     }
 

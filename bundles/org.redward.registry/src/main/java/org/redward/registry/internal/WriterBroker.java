@@ -1,6 +1,7 @@
 package org.redward.registry.internal;
 
 import org.osgi.framework.ServiceReference;
+import org.osgi.service.component.ComponentServiceObjects;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
@@ -19,12 +20,12 @@ public final class WriterBroker extends Tracked<SpectrumWriter> implements Write
         return FAMILY;
     }
 
-    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
-    void bind(SpectrumWriter service, ServiceReference<SpectrumWriter> ref) {
+    @Reference(service = SpectrumWriter.class, cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void bind(ComponentServiceObjects<SpectrumWriter> service, ServiceReference<SpectrumWriter> ref) {
         add(service, ref);
     }
 
-    void unbind(SpectrumWriter service, ServiceReference<SpectrumWriter> ref) {
-        remove(service, ref);
+    void unbind(ServiceReference<SpectrumWriter> ref) {
+        remove(ref);
     }
 }
