@@ -15,7 +15,8 @@ import org.eclipse.swt.widgets.Display;
 final class Session {
 
     /** What the run did. */
-    record Result(int status, int spectra, int decided, double firstWindowMs, long firstWindowNanos, List<String> messages) {
+    record Result(int status, int spectra, int decided, double firstWindowMs, long firstWindowNanos, List<String> messages,
+            List<String[]> services) {
     }
 
     private final Display display;
@@ -39,7 +40,11 @@ final class Session {
         this.startedNanos = startedNanos;
     }
 
-    Result run(Path snapshot, Path export) throws IOException {
+    /**
+     * Runs the window; {@code install} are bundle jars installed through the window (as its
+     * install button does) once the queue is filled.
+     */
+    Result run(Path snapshot, Path export, List<Path> install) throws IOException {
         List<String> messages = new ArrayList<>();
         try (Journal journal = Journal.open(journalFile)) {
             if (journal.unreadableLines() > 0) {
@@ -55,6 +60,9 @@ final class Session {
                 w.message("no redshift estimator is installed: spectra are shown without a machine redshift");
             }
             w.add(files);
+            for (Path jar : install) {
+                w.install(jar);
+            }
             if (snapshot != null) {
                 // wait (at most a minute) until the first spectrum is read, estimated and drawn;
                 // a timer wakes the loop so that sleep() cannot wait for an event that never comes
@@ -86,7 +94,8 @@ final class Session {
             if (!w.shell().isDisposed()) {
                 w.shell().dispose();
             }
-            return new Result(0, spectra, decided, (shownAt - startedNanos) / 1e6, shownAt, messages);
+            List<String[]> services = backend.services();
+            return new Result(0, spectra, decided, (shownAt - startedNanos) / 1e6, shownAt, messages, services);
         }
     }
 }

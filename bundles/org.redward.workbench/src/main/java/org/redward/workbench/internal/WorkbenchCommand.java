@@ -121,6 +121,8 @@ public final class WorkbenchCommand implements Command {
         Path snapshot;
         @Option(names = "--export", paramLabel = "FILE", description = "when the window closes, write the queue with the verdict columns (.csv or .jsonl)")
         Path export;
+        @Option(names = "--install", paramLabel = "JAR", description = "install and start this bundle jar once the window is open, as its Bundles panel does (repeatable)")
+        List<Path> install = new ArrayList<>();
         @Option(names = "--size", paramLabel = "WxH", description = "window size in pixels (default: 1440x900)")
         String size = "1440x900";
         @Option(names = "--json", description = "on exit, print one JSON object: journal, spectra, decided, timings")
@@ -163,13 +165,14 @@ public final class WorkbenchCommand implements Command {
                 () -> lineLists, () -> lineFinder, a.lineList, () -> cosmologies, () -> cosmologyCalculator, a.cosmology);
         Path snapshot = a.snapshot == null ? null : ctx.workingDirectory().resolve(a.snapshot);
         Path export = a.export == null ? null : ctx.workingDirectory().resolve(a.export);
+        List<Path> install = a.install.stream().map(p -> ctx.workingDirectory().resolve(p)).toList();
 
         CompletableFuture<Session.Result> done = new CompletableFuture<>();
         mainThread.execute(() -> {
             try {
                 Display d = Display.getCurrent() != null ? Display.getCurrent() : new Display();
                 display = d;
-                done.complete(new Session(d, backend, journalFile, ids, files, wh[0], wh[1], started).run(snapshot, export));
+                done.complete(new Session(d, backend, journalFile, ids, files, wh[0], wh[1], started).run(snapshot, export, install));
             } catch (SWTError e) {
                 done.completeExceptionally(new IllegalStateException("cannot open a window (" + e.getMessage()
                         + "); is there a display? (DISPLAY=" + System.getenv("DISPLAY") + ")", e));
@@ -188,7 +191,9 @@ public final class WorkbenchCommand implements Command {
         if (a.json) {
             ctx.out().println(Json.object().put("journal", journalFile.toString()).put("spectra", r.spectra()).put("decided", r.decided())
                     .put("first_window_ms_after_command", r.firstWindowMs()).put("first_window_ms_after_process_start", jvmMs)
-                    .put("snapshot", snapshot == null ? null : snapshot.toString()));
+                    .put("snapshot", snapshot == null ? null : snapshot.toString()).put("messages", r.messages())
+                    .put("services", r.services().stream().map(x -> Json.object().put("family", x[0]).put("id", x[1]).put("bundle", x[2]))
+                            .toList()));
         } else {
             ctx.err().printf(java.util.Locale.ROOT, "workbench: first window %.0f ms after the command started (%.0f ms after the process started); %d of %d spectra decided; journal %s%n",
                     r.firstWindowMs(), jvmMs, r.decided(), r.spectra(), journalFile);

@@ -91,6 +91,7 @@ final class WorkbenchWindow {
     private List<RestLine> restLines;
     private boolean showSky = true;
     private Button skyToggle;
+    private TabFolder panels;
 
     private Table queueTable;
     private Combo classFilter;
@@ -298,6 +299,7 @@ final class WorkbenchWindow {
         verdictLabel = wrapLabel(right, "");
 
         TabFolder tabs = new TabFolder(right, SWT.TOP);
+        panels = tabs;
         tabs.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         TabItem t1 = new TabItem(tabs, SWT.NONE);
         t1.setText("Velocity & distance");
@@ -911,7 +913,8 @@ final class WorkbenchWindow {
         }
         MachineAnswer a = it.primary();
         if (a != null && a.ok()) {
-            b.append(String.format(Locale.ROOT, "  ·  %s z = %.5f ± %.5f, %s%s", a.estimator(), a.z(), a.zError(), a.objectClass(),
+            b.append(String.format(Locale.ROOT, "  ·  %s z = %.5f%s, %s%s", a.estimator(), a.z(),
+                    Double.isFinite(a.zError()) ? String.format(Locale.ROOT, " ± %.5f", a.zError()) : "", a.objectClass(),
                     a.grade().isEmpty() ? "" : ", grade " + a.grade()));
         } else if (a != null) {
             b.append("  ·  ").append(a.estimator()).append(" failed: ").append(a.error());
@@ -1246,14 +1249,27 @@ final class WorkbenchWindow {
         }
     }
 
-    /** Installs a bundle jar; a failure is a message in the window, nothing else changes. */
+    /**
+     * Installs a bundle jar and shows the Bundles panel with its services; a failure is a message
+     * in the window, nothing else changes.
+     */
     void install(Path jar) {
         try {
+            List<String> before = backend.estimators();
             message(backend.install(jar));
+            for (String id : backend.estimators()) {
+                if (!before.contains(id)) {
+                    message("estimator '" + id + "' is now installed (see Bundles); compare it with --estimators " + id
+                            + (estimatorIds.isEmpty() ? "" : "," + estimatorIds.get(0)));
+                }
+            }
         } catch (IOException | RuntimeException e) {
             message("bundle " + jar.getFileName() + " was not installed: " + e.getMessage());
         }
         refreshBundles();
+        if (!panels.isDisposed()) {
+            panels.setSelection(1);
+        }
     }
 
     // ------------------------------------------------------------------ files
