@@ -341,7 +341,12 @@ final class WorkbenchWindow {
         messageBar = new Label(shell, SWT.NONE);
         messageBar.setBackground(palette.paper);
         messageBar.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        refreshBundles();
+        // the bundles panel is filled once the window is up (listing services can start them)
+        display.asyncExec(() -> {
+            if (!shell.isDisposed()) {
+                refreshBundles();
+            }
+        });
     }
 
     private Label label(Composite parent, String text) {
