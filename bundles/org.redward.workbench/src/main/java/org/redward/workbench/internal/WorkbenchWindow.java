@@ -598,9 +598,11 @@ final class WorkbenchWindow {
     }
 
     /**
-     * Reads an item on the reader thread. Shown now: hands the spectrum (its chart drawn at the
-     * canvas size) over as soon as it is read. Read ahead: also estimates it on the estimator
-     * thread and draws both charts there, then hands everything over at once.
+     * Reads an item on the reader thread and draws its spectrum chart there at the canvas size,
+     * then hands it over at once (shown if it is the current item, else kept for when it is);
+     * missing answers are then estimated on the estimator thread, which draws the score chart
+     * (and, for an item read ahead, the spectrum again at the estimated z) and hands them over in
+     * turn. A slow estimator never keeps a spectrum from being shown.
      */
     private void loadInBackground(QueueItem it, boolean showWhenDone) {
         if (!pending.add(it)) {
@@ -614,51 +616,30 @@ final class WorkbenchWindow {
         boolean sky = showSky;
         org.eclipse.swt.graphics.Point ss = spectrumCanvas.getSize();
         org.eclipse.swt.graphics.Point cs = scoreCanvas.getSize();
+        boolean estimate = !missing.isEmpty() && estimating.add(it);
         reader.submit(() -> {
             Backend.Loaded l = known;
-            ChartCanvas.Prepared spec = null;
             double z0 = zOf(decision, answersNow);
+            Ready r;
             try {
                 if (l == null) {
                     l = backend.load(it);
                 }
-                if (showWhenDone || missing.isEmpty()) {
-                    spec = prepareSpectrum(l, lines, z0, sky, ss);
-                }
+                r = new Ready(prepareSpectrum(l, lines, z0, sky, ss), missing.isEmpty() ? prepareScores(answersNow, z0, cs) : null, z0, sky);
             } catch (IOException | RuntimeException e) {
                 String why = e.getMessage() == null ? e.toString() : e.getMessage();
                 handOver(() -> loadFailed(it, why));
                 return;
             }
             Backend.Loaded loaded = l;
-            if (showWhenDone || missing.isEmpty()) {
-                ChartCanvas.Prepared s0 = spec;
-                ChartCanvas.Prepared score = missing.isEmpty() ? prepareScores(answersNow, z0, cs) : null;
-                handOver(() -> arrived(it, loaded, Map.of(), new Ready(s0, score, z0, sky)));
-                return;
+            handOver(() -> arrived(it, loaded, r));
+            if (estimate) {
+                estimator.submit(() -> estimateAndHandOver(it, loaded, missing, answersNow, decision, !showWhenDone ? lines : null, sky, ss, cs));
             }
-            estimating.add(it);
-            estimator.submit(() -> {
-                Map<String, MachineAnswer> answers = estimate(loaded, missing);
-                Map<String, MachineAnswer> all = new LinkedHashMap<>(answersNow);
-                all.putAll(answers);
-                double z1 = zOf(decision, all);
-                Ready r = null;
-                try {
-                    r = new Ready(prepareSpectrum(loaded, lines, z1, sky, ss), prepareScores(all, z1, cs), z1, sky);
-                } catch (RuntimeException e) {
-                    // drawn on the UI thread when shown
-                }
-                Ready ahead = r;
-                handOver(() -> {
-                    estimating.remove(it);
-                    arrived(it, loaded, answers, ahead);
-                });
-            });
         });
     }
 
-    /** Estimates the shown item on the estimator thread; the score view fills in when done. */
+    /** Estimates the shown item (already read) on the estimator thread; the score view fills in when done. */
     private void estimateInBackground(QueueItem it) {
         Backend.Loaded l = cache.get(it);
         if (l == null || !estimating.add(it)) {
@@ -668,30 +649,44 @@ final class WorkbenchWindow {
         Map<String, MachineAnswer> answersNow = new LinkedHashMap<>(it.answers());
         Decision decision = it.decision();
         org.eclipse.swt.graphics.Point cs = scoreCanvas.getSize();
-        estimator.submit(() -> {
-            Map<String, MachineAnswer> answers = estimate(l, missing);
-            Map<String, MachineAnswer> all = new LinkedHashMap<>(answersNow);
-            all.putAll(answers);
-            ChartCanvas.Prepared score = null;
-            try {
-                score = prepareScores(all, zOf(decision, all), cs);
-            } catch (RuntimeException e) {
-                // drawn on the UI thread
+        estimator.submit(() -> estimateAndHandOver(it, l, missing, answersNow, decision, null, showSky, null, cs));
+    }
+
+    /**
+     * Runs on the estimator thread: the missing answers, the score chart drawn at the canvas size
+     * and, when {@code lines} is given, the spectrum chart again at the estimated z; then hands
+     * them over.
+     */
+    private void estimateAndHandOver(QueueItem it, Backend.Loaded l, List<String> missing, Map<String, MachineAnswer> answersNow,
+            Decision decision, List<RestLine> lines, boolean sky, org.eclipse.swt.graphics.Point ss, org.eclipse.swt.graphics.Point cs) {
+        Map<String, MachineAnswer> answers = estimate(l, missing);
+        Map<String, MachineAnswer> all = new LinkedHashMap<>(answersNow);
+        all.putAll(answers);
+        double z = zOf(decision, all);
+        Ready r = null;
+        try {
+            r = new Ready(lines == null ? null : prepareSpectrum(l, lines, z, sky, ss), prepareScores(all, z, cs), z, sky);
+        } catch (RuntimeException e) {
+            // drawn on the UI thread when shown
+        }
+        Ready drawn = r;
+        handOver(() -> estimated(it, answers, drawn));
+    }
+
+    /** The answers of an item have come (UI thread). */
+    private void estimated(QueueItem it, Map<String, MachineAnswer> answers, Ready drawn) {
+        estimating.remove(it);
+        it.answers().putAll(answers);
+        refreshRow(it);
+        if (shown == it) {
+            double z = it.currentZ();
+            if (!sameZ(z, shownZ)) {
+                preview(z);
             }
-            ChartCanvas.Prepared sc = score;
-            handOver(() -> {
-                estimating.remove(it);
-                it.answers().putAll(answers);
-                refreshRow(it);
-                if (shown == it) {
-                    double z = it.currentZ();
-                    if (!sameZ(z, shownZ)) {
-                        preview(z);
-                    }
-                    drawScores(it, sc, true);
-                }
-            });
-        });
+            drawScores(it, drawn != null && sameZ(drawn.z(), z) ? drawn.score() : null, true);
+        } else if (drawn != null && drawn.spectrum() != null) {
+            ready.put(it, drawn);
+        }
     }
 
     private Map<String, MachineAnswer> estimate(Backend.Loaded l, List<String> ids) {
@@ -738,9 +733,9 @@ final class WorkbenchWindow {
         }
     }
 
-    private void arrived(QueueItem it, Backend.Loaded loaded, Map<String, MachineAnswer> answers, Ready ahead) {
+    /** An item has been read (UI thread): kept, and shown if it is the current one. */
+    private void arrived(QueueItem it, Backend.Loaded loaded, Ready ahead) {
         pending.remove(it);
-        it.answers().putAll(answers);
         cache.put(it, loaded);
         if (loaded.spectrum().metadata().objectId().isPresent()) {
             it.id(loaded.spectrum().metadata().objectId().get());
