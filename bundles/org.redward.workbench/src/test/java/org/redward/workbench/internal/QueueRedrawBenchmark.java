@@ -84,57 +84,21 @@ class QueueRedrawBenchmark {
             w.add(queue);
             waitDrawn(display, w);
             int steps = 300;
-            double[] spectrumMs = new double[steps];
-            double[] bothMs = new double[steps];
-            double[] cpu = new double[steps];
-            int reused = 0;
-            java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
             String loadBefore = Files.readString(Path.of("/proc/loadavg")).trim();
-            for (int i = 0; i < steps; i++) {
-                // a person looks at each spectrum for a moment: the reader reads ahead meanwhile
-                pumpFor(display, 150);
-                long c0 = threads.getCurrentThreadCpuTime();
-                long t0 = System.nanoTime();
-                w.move(1);
-                waitFor(display, () -> w.spectrumShownAt() != 0);
-                spectrumMs[i] = (w.spectrumShownAt() - t0) / 1e6;
-                cpu[i] = (threads.getCurrentThreadCpuTime() - c0) / 1e6;
-                waitDrawn(display, w);
-                bothMs[i] = (Math.max(w.spectrumShownAt(), w.scoresShownAt()) - t0) / 1e6;
-                reused += w.spectrumCanvas().reusedPixels() ? 1 : 0;
-            }
-            report("next spectrum, move to spectrum painted", spectrumMs);
-            report("next spectrum, move to both charts painted", bothMs);
-            report("next spectrum, CPU time of the UI thread to spectrum", cpu);
-            System.out.printf(Locale.ROOT, "BENCHMARK workbench %d of %d moves showed charts drawn ahead by the reader%n", reused, steps);
+            Moves next = moves(display, w, steps, 1, true);
+            report("next spectrum, move to spectrum painted", next.spectrumMs);
+            report("next spectrum, move to both charts painted", next.bothMs);
+            report("next spectrum, CPU time of the UI thread to spectrum", next.cpuMs);
+            System.out.printf(Locale.ROOT, "BENCHMARK workbench %d of %d moves showed charts drawn ahead by the reader%n", next.reused, steps);
             // jumps past the read-ahead window: read (warm), drawn and estimated (cached) on demand
-            int jumps = 60;
-            double[] jumpMs = new double[jumps];
-            double[] jumpBoth = new double[jumps];
-            for (int i = 0; i < jumps; i++) {
-                pumpFor(display, 150);
-                long t0 = System.nanoTime();
-                w.move(7);
-                waitFor(display, () -> w.spectrumShownAt() != 0);
-                jumpMs[i] = (w.spectrumShownAt() - t0) / 1e6;
-                waitDrawn(display, w);
-                jumpBoth[i] = (Math.max(w.spectrumShownAt(), w.scoresShownAt()) - t0) / 1e6;
-            }
-            report("jump of 7 (not read ahead), to spectrum painted", jumpMs);
-            report("jump of 7 (not read ahead), to both painted", jumpBoth);
+            Moves jumps = moves(display, w, 60, 7, true);
+            report("jump of 7 (not read ahead), to spectrum painted", jumps.spectrumMs);
+            report("jump of 7 (not read ahead), to both painted", jumps.bothMs);
             // a slow estimator (each answer 400 ms, two per spectrum) and a person faster than it:
             // the spectrum still shows at once, the scores fill in later
             backend.extraMillis = 400;
-            int slow = 40;
-            double[] slowMs = new double[slow];
-            for (int i = 0; i < slow; i++) {
-                pumpFor(display, 150);
-                long t0 = System.nanoTime();
-                w.move(1);
-                waitFor(display, () -> w.spectrumShownAt() != 0);
-                slowMs[i] = (w.spectrumShownAt() - t0) / 1e6;
-            }
-            report("slow estimator (0.8 s/spectrum), to spectrum", slowMs);
+            Moves slow = moves(display, w, 40, 1, false);
+            report("slow estimator (0.8 s/spectrum), to spectrum", slow.spectrumMs);
             backend.extraMillis = 0;
             System.out.printf(Locale.ROOT, "BENCHMARK workbench load average before: %s, after: %s (2 cores; wall times grow with load, CPU time much less)%n",
                     loadBefore, Files.readString(Path.of("/proc/loadavg")).trim());
@@ -144,6 +108,37 @@ class QueueRedrawBenchmark {
         } finally {
             Files.deleteIfExists(journal);
         }
+    }
+
+    /** Times of a series of moves: to the spectrum painted, to both charts, UI-thread CPU to the spectrum. */
+    record Moves(double[] spectrumMs, double[] bothMs, double[] cpuMs, int reused) {
+    }
+
+    /**
+     * Moves {@code n} times by {@code step}, pausing 150 ms on each spectrum first (a person looks
+     * at it for a moment; the reader reads ahead meanwhile); waits for the scores too when asked.
+     */
+    private static Moves moves(Display display, WorkbenchWindow w, int n, int step, boolean waitForScores) {
+        java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
+        double[] spectrum = new double[n];
+        double[] both = new double[n];
+        double[] cpu = new double[n];
+        int reused = 0;
+        for (int i = 0; i < n; i++) {
+            pumpFor(display, 150);
+            long c0 = threads.getCurrentThreadCpuTime();
+            long t0 = System.nanoTime();
+            w.move(step);
+            waitFor(display, () -> w.spectrumShownAt() != 0);
+            spectrum[i] = (w.spectrumShownAt() - t0) / 1e6;
+            cpu[i] = (threads.getCurrentThreadCpuTime() - c0) / 1e6;
+            reused += w.spectrumCanvas().reusedPixels() ? 1 : 0;
+            if (waitForScores) {
+                waitDrawn(display, w);
+                both[i] = (Math.max(w.spectrumShownAt(), w.scoresShownAt()) - t0) / 1e6;
+            }
+        }
+        return new Moves(spectrum, both, cpu, reused);
     }
 
     private static void pumpFor(Display display, long millis) {
