@@ -162,6 +162,10 @@ public final class ScatterChart {
         a.setBase(10);
         a.setNumberFormatOverride(ChartStyle.rootFormat("0.###"));
         a.setSmallestValue(1e-6);
+        // ticks at whole powers of ten only: a tick at 10^4.6 would be labelled 39810.717
+        a.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        a.setMinorTickMarksVisible(true);
+        a.setMinorTickCount(9);
         return a;
     }
 }
