@@ -12,6 +12,10 @@ import java.util.Objects;
  * variance as masked rather than failing the whole spectrum. When a file has no error array the
  * inverse variance is 1 everywhere and {@link #hasErrors()} is false.
  *
+ * <p>A spectrum may carry the sky spectrum that was subtracted from it (or measured beside it), when
+ * the file has one: same pixels, same unit as the flux, NaN where unknown. It is for display and
+ * diagnosis only; no estimator needs it. {@link #hasSky()} is false when the file gave none.
+ *
  * <p>Immutable and thread-safe; accessors return copies of arrays.
  */
 public final class Spectrum {
@@ -23,9 +27,17 @@ public final class Spectrum {
     private final String fluxUnit;
     private final boolean hasErrors;
     private final SpectrumMetadata metadata;
+    /** The sky per pixel (flux unit, NaN unknown), or null when the file has none. */
+    private final double[] sky;
 
     private Spectrum(SpectralAxis axis, double[] flux, double[] ivar, boolean[] mask, String fluxUnit,
             boolean hasErrors, SpectrumMetadata metadata) {
+        this(axis, flux, ivar, mask, fluxUnit, hasErrors, metadata, null);
+    }
+
+    private Spectrum(SpectralAxis axis, double[] flux, double[] ivar, boolean[] mask, String fluxUnit,
+            boolean hasErrors, SpectrumMetadata metadata, double[] sky) {
+        this.sky = sky;
         this.axis = axis;
         this.flux = flux;
         this.inverseVariance = ivar;
@@ -113,16 +125,49 @@ public final class Spectrum {
         return 1.0 - (double) usablePixels() / size();
     }
 
-    /** A copy with other metadata. */
+    /** A copy with other metadata (the sky, if any, is kept). */
     public Spectrum withMetadata(SpectrumMetadata m) {
-        return new Spectrum(axis, flux, inverseVariance, mask, fluxUnit, hasErrors, Objects.requireNonNull(m));
+        return new Spectrum(axis, flux, inverseVariance, mask, fluxUnit, hasErrors, Objects.requireNonNull(m), sky);
+    }
+
+    /**
+     * A copy that carries a sky spectrum (copied): one value per pixel in the flux unit; NaN or
+     * infinite values become NaN (unknown). {@code null} gives a copy without sky.
+     *
+     * @throws IllegalArgumentException if the length differs from the number of pixels
+     */
+    public Spectrum withSky(double[] skyFlux) {
+        if (skyFlux == null) {
+            return sky == null ? this : new Spectrum(axis, flux, inverseVariance, mask, fluxUnit, hasErrors, metadata, null);
+        }
+        if (skyFlux.length != flux.length) {
+            throw new IllegalArgumentException("sky has " + skyFlux.length + " values but the axis has " + flux.length + " pixels");
+        }
+        double[] k = skyFlux.clone();
+        for (int i = 0; i < k.length; i++) {
+            if (!Double.isFinite(k[i])) {
+                k[i] = Double.NaN;
+            }
+        }
+        return new Spectrum(axis, flux, inverseVariance, mask, fluxUnit, hasErrors, metadata, k);
+    }
+
+    /** True if the file gave a sky spectrum. */
+    public boolean hasSky() {
+        return sky != null;
+    }
+
+    /** A copy of the sky spectrum (flux unit, NaN unknown), or null when the file has none. */
+    public double[] sky() {
+        return sky == null ? null : sky.clone();
     }
 
     @Override
     public boolean equals(Object o) {
         return o instanceof Spectrum s && axis.equals(s.axis) && Arrays.equals(flux, s.flux)
                 && Arrays.equals(inverseVariance, s.inverseVariance) && Arrays.equals(mask, s.mask)
-                && fluxUnit.equals(s.fluxUnit) && hasErrors == s.hasErrors && metadata.equals(s.metadata);
+                && fluxUnit.equals(s.fluxUnit) && hasErrors == s.hasErrors && metadata.equals(s.metadata)
+                && Arrays.equals(sky, s.sky);
     }
 
     @Override

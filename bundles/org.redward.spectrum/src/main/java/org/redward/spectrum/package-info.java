@@ -8,5 +8,5 @@
  * <p>All types here are immutable and thread-safe.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.0.0")
+@org.osgi.annotation.versioning.Version("1.1.0")
 package org.redward.spectrum;

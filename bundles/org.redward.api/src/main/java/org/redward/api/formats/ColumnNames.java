@@ -20,6 +20,8 @@ public final class ColumnNames {
             "uncertainty", "e_flux", "stddev", "std");
     public static final List<String> VARIANCE = List.of("variance", "var", "flux_var");
     public static final List<String> MASK = List.of("mask", "badpix", "bad_pixel", "pixel_mask", "bad");
+    /** The sky spectrum subtracted from (or measured beside) the object, in the flux unit. */
+    public static final List<String> SKY = List.of("sky", "sky_flux", "skyflux", "flux_sky");
     /** A column that numbers the spectra of a file holding several, one row per pixel. */
     public static final List<String> SPECTRUM_INDEX = List.of("spectrum", "spectrum_index", "spec_index");
     public static final List<String> ID = List.of("object_id", "obj_id", "objid", "targetid", "target_id", "id", "name", "object", "objname");

@@ -29,7 +29,11 @@ import org.jfree.data.Range;
  * click reports the x value under the pointer. While dragging the chart is drawn without
  * anti-aliasing, and with it again when the button is released.
  *
- * <p>UI thread only, like every SWT widget.
+ * <p>A chart can also be drawn ahead, off the UI thread ({@link #prepare}), while it is not yet
+ * shown: the canvas then only turns the prepared pixels into an SWT image, so that moving to a
+ * spectrum that was read ahead costs a copy, not a drawing.
+ *
+ * <p>UI thread only, like every SWT widget (except {@link #prepare}).
  */
 final class ChartCanvas extends Canvas {
 
@@ -38,7 +42,7 @@ final class ChartCanvas extends Canvas {
     private Range homeY;
     private Image image;
     private boolean dirty = true;
-    private final ChartRenderingInfo info = new ChartRenderingInfo();
+    private ChartRenderingInfo info = new ChartRenderingInfo();
     private DoubleConsumer onClick = x -> { };
     private String emptyText = "";
 
@@ -119,8 +123,54 @@ final class ChartCanvas extends Canvas {
         addListener(SWT.MouseDoubleClick, e -> home());
     }
 
+    /**
+     * A chart drawn ahead at one size: its pixels (as SWT image data, which needs no display) and
+     * the rendering info of that drawing (where the plot area is, for clicks and zooms).
+     */
+    record Prepared(JFreeChart chart, ImageData pixels, ChartRenderingInfo info, double drawMillis) {
+    }
+
+    /**
+     * Draws a chart that no other thread touches into pixels of the given size. Any thread; the
+     * chart must not be shown yet (JFreeChart is not thread-safe).
+     */
+    static Prepared prepare(JFreeChart c, int w, int h) {
+        long t0 = System.nanoTime();
+        ChartRenderingInfo inf = new ChartRenderingInfo();
+        ImageData data = pixels(c, w, h, inf, false);
+        return new Prepared(c, data, inf, (System.nanoTime() - t0) / 1e6);
+    }
+
+    /**
+     * Shows a chart drawn ahead: if it was drawn at this canvas's size its pixels are shown as they
+     * are, else it is drawn again. Its current ranges become "home".
+     */
+    void setChart(Prepared p) {
+        setChart(p.chart(), "");
+        Point size = getSize();
+        if (p.pixels().width == size.x && p.pixels().height == size.y) {
+            if (image != null) {
+                image.dispose();
+            }
+            long t0 = System.nanoTime();
+            image = new Image(getDisplay(), p.pixels());
+            info = p.info();
+            dirty = false;
+            lastDrawMillis = (System.nanoTime() - t0) / 1e6;
+            reusedPixels = true;
+        }
+    }
+
+    /** True if the last chart shown was drawn ahead at the right size (its pixels were reused). */
+    boolean reusedPixels() {
+        return reusedPixels;
+    }
+
+    private boolean reusedPixels;
+
     /** Shows a chart (null: shows {@code emptyText} instead); its current ranges become "home". */
     void setChart(JFreeChart c, String textWhenEmpty) {
+        reusedPixels = false;
         chart = c;
         emptyText = textWhenEmpty == null ? "" : textWhenEmpty;
         if (c != null) {
@@ -132,6 +182,15 @@ final class ChartCanvas extends Canvas {
     }
 
     JFreeChart chart() { return chart; }
+
+    /** True if the view is not the chart's full ("home") range. */
+    boolean zoomed() {
+        if (chart == null) {
+            return false;
+        }
+        XYPlot p = chart.getXYPlot();
+        return !p.getDomainAxis().getRange().equals(homeX) || !p.getRangeAxis().getRange().equals(homeY);
+    }
 
     /** Called with the x value (data units) of a plain left click inside the plot. */
     void onClick(DoubleConsumer c) {
@@ -197,6 +256,17 @@ final class ChartCanvas extends Canvas {
 
     private void render(int w, int h) {
         long t0 = System.nanoTime();
+        ImageData data = pixels(chart, w, h, info, fast);
+        if (image != null) {
+            image.dispose();
+        }
+        image = new Image(getDisplay(), data);
+        dirty = false;
+        lastDrawMillis = (System.nanoTime() - t0) / 1e6;
+    }
+
+    /** Draws the chart with Java2D and returns the pixels as SWT image data (no display needed). */
+    private static ImageData pixels(JFreeChart chart, int w, int h, ChartRenderingInfo info, boolean fast) {
         boolean aa = chart.getAntiAlias();
         if (fast) {
             chart.setAntiAlias(false);
@@ -213,13 +283,7 @@ final class ChartCanvas extends Canvas {
         // 0x00RRGGBB ints written big-endian are the bytes of a 32-bit direct SWT image (MSB first)
         byte[] bytes = new byte[w * h * 4];
         java.nio.ByteBuffer.wrap(bytes).asIntBuffer().put(px);
-        ImageData data = new ImageData(w, h, 32, new PaletteData(0xFF0000, 0xFF00, 0xFF), 4, bytes);
-        if (image != null) {
-            image.dispose();
-        }
-        image = new Image(getDisplay(), data);
-        dirty = false;
-        lastDrawMillis = (System.nanoTime() - t0) / 1e6;
+        return new ImageData(w, h, 32, new PaletteData(0xFF0000, 0xFF00, 0xFF), 4, bytes);
     }
 
     private Rectangle2D dataArea() {

@@ -170,7 +170,7 @@ final class OsgiBackend implements Backend {
                         throw new IOException(r.error());
                     }
                     Spectrum s = r.spectrum().orElseThrow();
-                    return new Loaded(s, null, src.layout(), findLines(s));
+                    return new Loaded(s, s.sky(), src.layout(), findLines(s));
                 }
             }
         }

@@ -15,7 +15,31 @@ import org.eclipse.swt.widgets.Display;
 final class Session {
 
     /** What the run did. */
-    record Result(int status, int spectra, int decided, double firstWindowMs, long firstWindowNanos, List<String> messages) {
+    record Result(int status, int spectra, int decided, double firstWindowMs, long firstWindowNanos, List<String> messages,
+            List<String[]> services, Timeline timeline) {
+    }
+
+    /**
+     * When the window came up, as wall-clock times (epoch milliseconds, so that a benchmark that
+     * launched the process can compare them with its own clock): the window built, opened (shown
+     * on screen) and first painted.
+     */
+    record Timeline(long buildStartEpochMs, long builtEpochMs, long openedEpochMs, long firstPaintEpochMs, long cpuMsAtFirstPaint) {
+    }
+
+    /**
+     * CPU time of the whole process so far (user + system, all threads), in ms, from
+     * /proc/self/stat (Linux; clock ticks of 10 ms, the usual USER_HZ of 100); -1 elsewhere.
+     */
+    static long processCpuMs() {
+        try {
+            String stat = java.nio.file.Files.readString(Path.of("/proc/self/stat"));
+            String[] f = stat.substring(stat.lastIndexOf(')') + 2).split(" ");
+            // after the command name: state is field 3 of the line, utime 14 and stime 15
+            return (Long.parseLong(f[11]) + Long.parseLong(f[12])) * 10;
+        } catch (IOException | RuntimeException e) {
+            return -1;
+        }
     }
 
     private final Display display;
@@ -39,22 +63,50 @@ final class Session {
         this.startedNanos = startedNanos;
     }
 
-    Result run(Path snapshot, Path export) throws IOException {
+    /**
+     * Runs the window; {@code install} are bundle jars installed through the window (as its
+     * install button does) once the queue is filled.
+     */
+    Result run(Path snapshot, Path export, List<Path> install) throws IOException {
         List<String> messages = new ArrayList<>();
         try (Journal journal = Journal.open(journalFile)) {
             if (journal.unreadableLines() > 0) {
                 messages.add("journal " + journalFile + ": " + journal.unreadableLines() + " line(s) could not be read and were skipped");
             }
+            long buildStart = System.currentTimeMillis();
+            long[] firstPaint = {0, -1};
+            org.eclipse.swt.widgets.Listener painted = e -> {
+                if (firstPaint[0] == 0) {
+                    firstPaint[0] = System.currentTimeMillis();
+                    firstPaint[1] = processCpuMs();
+                }
+            };
+            display.addFilter(org.eclipse.swt.SWT.Paint, painted);
             WorkbenchWindow w = new WorkbenchWindow(display, backend, journal, estimators);
+            long built = System.currentTimeMillis();
             w.open(width, height);
+            long opened = System.currentTimeMillis();
             long shownAt = System.nanoTime();
+            // until the window has painted (at most 5 s: a display that never paints must not hang the command)
+            long paintLimit = System.nanoTime() + 5_000_000_000L;
+            while (firstPaint[0] == 0 && System.nanoTime() < paintLimit) {
+                if (!display.readAndDispatch()) {
+                    display.timerExec(5, () -> { });
+                    display.sleep();
+                }
+            }
             while (display.readAndDispatch()) {
                 // first paint
             }
+            display.removeFilter(org.eclipse.swt.SWT.Paint, painted);
+            Timeline timeline = new Timeline(buildStart, built, opened, firstPaint[0], firstPaint[1]);
             if (estimators.isEmpty()) {
                 w.message("no redshift estimator is installed: spectra are shown without a machine redshift");
             }
             w.add(files);
+            for (Path jar : install) {
+                w.install(jar);
+            }
             if (snapshot != null) {
                 // wait (at most a minute) until the first spectrum is read, estimated and drawn;
                 // a timer wakes the loop so that sleep() cannot wait for an event that never comes
@@ -86,7 +138,8 @@ final class Session {
             if (!w.shell().isDisposed()) {
                 w.shell().dispose();
             }
-            return new Result(0, spectra, decided, (shownAt - startedNanos) / 1e6, shownAt, messages);
+            List<String[]> services = backend.services();
+            return new Result(0, spectra, decided, (shownAt - startedNanos) / 1e6, shownAt, messages, services, timeline);
         }
     }
 }

@@ -121,6 +121,8 @@ public final class WorkbenchCommand implements Command {
         Path snapshot;
         @Option(names = "--export", paramLabel = "FILE", description = "when the window closes, write the queue with the verdict columns (.csv or .jsonl)")
         Path export;
+        @Option(names = "--install", paramLabel = "JAR", description = "install and start this bundle jar once the window is open, as its Bundles panel does (repeatable)")
+        List<Path> install = new ArrayList<>();
         @Option(names = "--size", paramLabel = "WxH", description = "window size in pixels (default: 1440x900)")
         String size = "1440x900";
         @Option(names = "--json", description = "on exit, print one JSON object: journal, spectra, decided, timings")
@@ -130,6 +132,44 @@ public final class WorkbenchCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         long started = System.nanoTime();
+        long startedEpochMs = System.currentTimeMillis();
+        // the display takes about a second to come up: start it on the main thread at once, while the
+        // options are read and the services looked up (not for --help or --version, which open no window)
+        boolean window = arguments.stream().noneMatch(x -> x.equals("-h") || x.equals("--help") || x.equals("-V") || x.equals("--version"));
+        CompletableFuture<Display> early = new CompletableFuture<>();
+        long[] displayEpochMs = new long[2];
+        if (window) {
+            mainThread.execute(() -> {
+                displayEpochMs[0] = System.currentTimeMillis();
+                try {
+                    // the workbench journals every decision at once, so it needs no log-out notice from a
+                    // desktop session manager: skip SWT's D-Bus session-manager handshake (time at start-up)
+                    if (System.getProperty(SESSION_MANAGER_OFF) == null) {
+                        System.setProperty(SESSION_MANAGER_OFF, "true");
+                    }
+                    early.complete(Display.getCurrent() != null ? Display.getCurrent() : new Display());
+                } catch (Throwable t) {
+                    early.completeExceptionally(t);
+                }
+                displayEpochMs[1] = System.currentTimeMillis();
+            });
+        }
+        try {
+            return run(ctx, arguments, started, startedEpochMs, early, displayEpochMs);
+        } finally {
+            if (window) {
+                // a usage error or a failure before the window opened: close the display made early
+                mainThread.execute(() -> early.thenAccept(d -> {
+                    if (!d.isDisposed() && d.getShells().length == 0) {
+                        d.dispose();
+                    }
+                }));
+            }
+        }
+    }
+
+    private int run(CommandContext ctx, List<String> arguments, long started, long startedEpochMs, CompletableFuture<Display> early,
+            long[] displayEpochMs) throws Exception {
         Args a = new Args();
         CommandLine cl = new CommandLine(a);
         try {
@@ -163,16 +203,22 @@ public final class WorkbenchCommand implements Command {
                 () -> lineLists, () -> lineFinder, a.lineList, () -> cosmologies, () -> cosmologyCalculator, a.cosmology);
         Path snapshot = a.snapshot == null ? null : ctx.workingDirectory().resolve(a.snapshot);
         Path export = a.export == null ? null : ctx.workingDirectory().resolve(a.export);
+        List<Path> install = a.install.stream().map(p -> ctx.workingDirectory().resolve(p)).toList();
 
         CompletableFuture<Session.Result> done = new CompletableFuture<>();
         mainThread.execute(() -> {
             try {
-                Display d = Display.getCurrent() != null ? Display.getCurrent() : new Display();
+                // made by the task queued before this one on the same thread: complete by now
+                Display d = early.getNow(null);
+                if (d == null) {
+                    d = early.isCompletedExceptionally() ? early.join() : Display.getCurrent() != null ? Display.getCurrent() : new Display();
+                }
                 display = d;
-                done.complete(new Session(d, backend, journalFile, ids, files, wh[0], wh[1], started).run(snapshot, export));
+                done.complete(new Session(d, backend, journalFile, ids, files, wh[0], wh[1], started).run(snapshot, export, install));
+            } catch (java.util.concurrent.CompletionException e) {
+                done.completeExceptionally(e.getCause() instanceof SWTError se ? noWindow(se) : e.getCause());
             } catch (SWTError e) {
-                done.completeExceptionally(new IllegalStateException("cannot open a window (" + e.getMessage()
-                        + "); is there a display? (DISPLAY=" + System.getenv("DISPLAY") + ")", e));
+                done.completeExceptionally(noWindow(e));
             } catch (Throwable t) {
                 done.completeExceptionally(t);
             }
@@ -188,7 +234,16 @@ public final class WorkbenchCommand implements Command {
         if (a.json) {
             ctx.out().println(Json.object().put("journal", journalFile.toString()).put("spectra", r.spectra()).put("decided", r.decided())
                     .put("first_window_ms_after_command", r.firstWindowMs()).put("first_window_ms_after_process_start", jvmMs)
-                    .put("snapshot", snapshot == null ? null : snapshot.toString()));
+                    .put("snapshot", snapshot == null ? null : snapshot.toString())
+                    .put("timeline_epoch_ms", Json.object().put("process_start", ManagementFactory.getRuntimeMXBean().getStartTime())
+                            .put("command_start", startedEpochMs).put("main_thread_start", displayEpochMs[0])
+                            .put("display_ready", displayEpochMs[1]).put("window_build_start", r.timeline().buildStartEpochMs())
+                            .put("window_built", r.timeline().builtEpochMs())
+                            .put("window_opened", r.timeline().openedEpochMs()).put("first_paint", r.timeline().firstPaintEpochMs()))
+                    .put("process_cpu_ms_at_first_paint", r.timeline().cpuMsAtFirstPaint())
+                    .put("messages", r.messages())
+                    .put("services", r.services().stream().map(x -> Json.object().put("family", x[0]).put("id", x[1]).put("bundle", x[2]))
+                            .toList()));
         } else {
             ctx.err().printf(java.util.Locale.ROOT, "workbench: first window %.0f ms after the command started (%.0f ms after the process started); %d of %d spectra decided; journal %s%n",
                     r.firstWindowMs(), jvmMs, r.decided(), r.spectra(), journalFile);
@@ -197,6 +252,11 @@ public final class WorkbenchCommand implements Command {
             }
         }
         return r.status();
+    }
+
+    private static IllegalStateException noWindow(SWTError e) {
+        return new IllegalStateException("cannot open a window (" + e.getMessage() + "); is there a display? (DISPLAY="
+                + System.getenv("DISPLAY") + ")", e);
     }
 
     static int[] parseSize(String s) throws UsageException {
@@ -214,6 +274,9 @@ public final class WorkbenchCommand implements Command {
         }
         throw new UsageException("--size: '" + s + "' is not WIDTHxHEIGHT in pixels (from 400x300)");
     }
+
+    /** SWT's switch for its desktop session-manager client (read when the display is made). */
+    static final String SESSION_MANAGER_OFF = "org.eclipse.swt.internal.SessionManagerDBus.disable";
 
     /** Keeps the SWT constant referenced (the bundle imports org.eclipse.swt). */
     static final int STYLE = SWT.NONE;

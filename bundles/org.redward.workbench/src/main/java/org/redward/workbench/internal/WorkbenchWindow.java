@@ -50,14 +50,15 @@ import org.redward.spectrum.Spectrum;
  * message strip at the bottom. Keyboard first (see {@link #KEYS}); every decision goes to the
  * journal before the screen moves on.
  *
- * <p>Everything here runs on the SWT UI thread; reading and estimating run on one worker thread
- * and come back through {@link Display#asyncExec}.
+ * <p>Everything here runs on the SWT UI thread; reading runs on a reader thread and estimating on
+ * an estimator thread, and their results come back through {@link Display#asyncExec}. The charts
+ * of spectra read ahead are drawn on those threads too, before they are shown.
  */
 final class WorkbenchWindow {
 
     /** The keyboard, shown in the help strip. */
     static final String KEYS = "→/Space next · ← back · U next undecided · Enter take selected solution · 1-9 pick solution"
-            + " · click spectrum, then choose a line and press Set z · X no redshift · S/K/T/0 grade · H full view";
+            + " · click spectrum, then choose a line and press Set z · X no redshift · S/K/T/0 grade · H full view · Y sky";
 
     private final Display display;
     private final Backend backend;
@@ -66,11 +67,10 @@ final class WorkbenchWindow {
     private final WorkQueue queue = new WorkQueue();
     private final Palette palette;
     private final Shell shell;
-    private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
-        Thread t = new Thread(r, "workbench-worker");
-        t.setDaemon(true);
-        return t;
-    });
+    /** Reads spectra and draws charts ahead. */
+    private final ExecutorService reader = daemon("workbench-reader");
+    /** Runs the estimators (apart from the reader, so that a slow estimator never delays showing a spectrum). */
+    private final ExecutorService estimator = daemon("workbench-estimator");
     private final Map<QueueItem, Backend.Loaded> cache = new LinkedHashMap<>(16, 0.75f, true) {
         private static final long serialVersionUID = 1L;
 
@@ -79,7 +79,19 @@ final class WorkbenchWindow {
             return size() > 24;
         }
     };
+    private final Map<QueueItem, Ready> ready = new LinkedHashMap<>(16, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<QueueItem, Ready> e) {
+            return size() > 6;
+        }
+    };
     private final List<String> messages = new ArrayList<>();
+    private List<RestLine> restLines;
+    private boolean showSky = true;
+    private Button skyToggle;
+    private TabFolder panels;
 
     private Table queueTable;
     private Combo classFilter;
@@ -119,9 +131,21 @@ final class WorkbenchWindow {
         this.shell = new Shell(display, SWT.SHELL_TRIM);
         shell.setText("Redward workbench");
         build();
-        shell.addListener(SWT.Dispose, e -> worker.shutdownNow());
+        shell.addListener(SWT.Dispose, e -> {
+            reader.shutdownNow();
+            estimator.shutdownNow();
+        });
         display.addFilter(SWT.KeyDown, keyFilter);
         shell.addListener(SWT.Dispose, e -> display.removeFilter(SWT.KeyDown, keyFilter));
+    }
+
+    private static ExecutorService daemon(String name) {
+        return Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, name);
+            t.setDaemon(true);
+            t.setPriority(Thread.NORM_PRIORITY - 1);
+            return t;
+        });
     }
 
     Shell shell() { return shell; }
@@ -149,7 +173,7 @@ final class WorkbenchWindow {
         Composite top = new Composite(shell, SWT.NONE);
         top.setBackground(palette.panel);
         top.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        GridLayout tl = new GridLayout(12, false);
+        GridLayout tl = new GridLayout(13, false);
         tl.marginHeight = 3;
         top.setLayout(tl);
         Button open = button(top, "Add spectra…", e -> chooseAndAdd());
@@ -176,6 +200,12 @@ final class WorkbenchWindow {
         undecidedOnly.setText("undecided only");
         undecidedOnly.setBackground(palette.panel);
         undecidedOnly.addListener(SWT.Selection, e -> applyFilter());
+        skyToggle = new Button(top, SWT.CHECK);
+        skyToggle.setText("sky (Y)");
+        skyToggle.setToolTipText("draw the sky spectrum under the object, on its own axis, when the file has one");
+        skyToggle.setSelection(showSky);
+        skyToggle.setBackground(palette.panel);
+        skyToggle.addListener(SWT.Selection, e -> showSky(skyToggle.getSelection()));
         counts = label(top, "");
         counts.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
 
@@ -269,6 +299,7 @@ final class WorkbenchWindow {
         verdictLabel = wrapLabel(right, "");
 
         TabFolder tabs = new TabFolder(right, SWT.TOP);
+        panels = tabs;
         tabs.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         TabItem t1 = new TabItem(tabs, SWT.NONE);
         t1.setText("Velocity & distance");
@@ -310,7 +341,12 @@ final class WorkbenchWindow {
         messageBar = new Label(shell, SWT.NONE);
         messageBar.setBackground(palette.paper);
         messageBar.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        refreshBundles();
+        // the bundles panel is filled once the window is up (listing services can start them)
+        display.asyncExec(() -> {
+            if (!shell.isDisposed()) {
+                refreshBundles();
+            }
+        });
     }
 
     private Label label(Composite parent, String text) {
@@ -476,10 +512,17 @@ final class WorkbenchWindow {
 
     // ------------------------------------------------------------------ showing one spectrum
 
-    /** Shows the current item: at once if it is loaded, else after the worker has read it. */
+    /**
+     * Shows the current item. A spectrum read ahead shows at once (its charts were drawn ahead
+     * off the UI thread when the canvas size has not changed); otherwise the reader reads it and
+     * it shows as soon as it is read, before any estimator has answered: the score view says
+     * "estimating" and fills in when the answers come. Never reads or estimates on the UI thread.
+     */
     void showCurrent() {
         QueueItem it = queue.current();
         shown = it;
+        spectrumShownAt = 0;
+        scoresShownAt = 0;
         pickedAngstrom = Double.NaN;
         if (queue.cursor() >= 0 && queueTable.getSelectionIndex() != queue.cursor()) {
             queueTable.setSelection(queue.cursor());
@@ -491,9 +534,17 @@ final class WorkbenchWindow {
             return;
         }
         Backend.Loaded l = cache.get(it);
-        if (l != null && answered(it)) {
-            draw(it, l);
-        } else if (!it.problem().isEmpty() && l == null) {
+        Ready r = ready.remove(it);
+        if (l != null) {
+            boolean fresh = r != null && r.sky() == showSky && sameZ(r.z(), it.currentZ());
+            drawSpectrum(it, l, fresh ? r.spectrum() : null);
+            if (answered(it)) {
+                drawScores(it, fresh ? r.score() : null, false);
+            } else {
+                scoreCanvas.setChart(null, "estimating…");
+                estimateInBackground(it);
+            }
+        } else if (!it.problem().isEmpty()) {
             drawProblem(it);
         } else {
             headline.setText(it.id() + " · reading…");
@@ -502,6 +553,10 @@ final class WorkbenchWindow {
             loadInBackground(it, true);
         }
         prefetch();
+    }
+
+    private static boolean sameZ(double a, double b) {
+        return Double.compare(a, b) == 0;
     }
 
     private boolean answered(QueueItem it) {
@@ -518,70 +573,226 @@ final class WorkbenchWindow {
         for (int k = 1; k <= 2; k++) {
             if (c + k < queue.view().size()) {
                 QueueItem next = queue.view().get(c + k);
-                if (!cache.containsKey(next) && next.problem().isEmpty()) {
+                if (!ready.containsKey(next) && next.problem().isEmpty()) {
                     loadInBackground(next, false);
                 }
             }
         }
     }
 
-    private final java.util.Set<QueueItem> pending = java.util.concurrent.ConcurrentHashMap.newKeySet();
+    /** Charts drawn ahead for an item read ahead: used once, when it is shown at the same z and sky setting. */
+    record Ready(ChartCanvas.Prepared spectrum, ChartCanvas.Prepared score, double z, boolean sky) {
+    }
 
-    private void loadInBackground(QueueItem it, boolean showWhenDone) {
-        if (!pending.add(it)) {
-            return;
-        }
+    private final java.util.Set<QueueItem> pending = java.util.concurrent.ConcurrentHashMap.newKeySet();
+    private final java.util.Set<QueueItem> estimating = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
+    private List<String> missingAnswers(QueueItem it) {
         List<String> missing = new ArrayList<>();
         for (String id : estimatorIds) {
             if (!it.answers().containsKey(id)) {
                 missing.add(id);
             }
         }
-        worker.submit(() -> {
-            Backend.Loaded l = null;
-            String problem = "";
-            Map<String, MachineAnswer> answers = new LinkedHashMap<>();
+        return missing;
+    }
+
+    /**
+     * Reads an item on the reader thread and draws its spectrum chart there at the canvas size,
+     * then hands it over at once (shown if it is the current item, else kept for when it is);
+     * missing answers are then estimated on the estimator thread, which draws the score chart
+     * (and, for an item read ahead, the spectrum again at the estimated z) and hands them over in
+     * turn. A slow estimator never keeps a spectrum from being shown.
+     */
+    private void loadInBackground(QueueItem it, boolean showWhenDone) {
+        if (!pending.add(it)) {
+            return;
+        }
+        Backend.Loaded known = cache.get(it);
+        List<String> missing = missingAnswers(it);
+        Map<String, MachineAnswer> answersNow = new LinkedHashMap<>(it.answers());
+        Decision decision = it.decision();
+        List<RestLine> lines = restLines();
+        boolean sky = showSky;
+        org.eclipse.swt.graphics.Point ss = spectrumCanvas.getSize();
+        org.eclipse.swt.graphics.Point cs = scoreCanvas.getSize();
+        boolean estimate = !missing.isEmpty() && estimating.add(it);
+        reader.submit(() -> {
+            Backend.Loaded l = known;
+            double z0 = zOf(decision, answersNow);
+            Ready r;
             try {
-                l = backend.load(it);
-                for (String id : missing) {
-                    answers.put(id, backend.estimate(id, l.spectrum()));
+                if (l == null) {
+                    l = backend.load(it);
                 }
+                r = new Ready(prepareSpectrum(l, lines, z0, sky, ss), missing.isEmpty() ? prepareScores(answersNow, z0, cs) : null, z0, sky);
             } catch (IOException | RuntimeException e) {
-                problem = e.getMessage() == null ? e.toString() : e.getMessage();
-            }
-            Backend.Loaded loaded = l;
-            String why = problem;
-            if (display.isDisposed()) {
+                String why = e.getMessage() == null ? e.toString() : e.getMessage();
+                handOver(() -> loadFailed(it, why));
                 return;
             }
-            display.asyncExec(() -> {
-                pending.remove(it);
-                if (shell.isDisposed()) {
-                    return;
-                }
-                it.answers().putAll(answers);
-                if (loaded != null) {
-                    cache.put(it, loaded);
-                    if (loaded.spectrum().metadata().objectId().isPresent()) {
-                        it.id(loaded.spectrum().metadata().objectId().get());
-                    }
-                } else {
-                    it.problem(why);
-                    message(why);
-                }
-                int row = queue.view().indexOf(it);
-                if (row >= 0) {
-                    queueTable.clear(row);
-                }
-                if (shown == it) {
-                    if (loaded != null) {
-                        draw(it, loaded);
-                    } else {
-                        drawProblem(it);
-                    }
-                }
-            });
+            Backend.Loaded loaded = l;
+            handOver(() -> arrived(it, loaded, r));
+            if (estimate) {
+                estimator.submit(() -> estimateAndHandOver(it, loaded, missing, answersNow, decision, !showWhenDone ? lines : null, sky, ss, cs));
+            }
         });
+    }
+
+    /** Estimates the shown item (already read) on the estimator thread; the score view fills in when done. */
+    private void estimateInBackground(QueueItem it) {
+        Backend.Loaded l = cache.get(it);
+        if (l == null || !estimating.add(it)) {
+            return;
+        }
+        List<String> missing = missingAnswers(it);
+        Map<String, MachineAnswer> answersNow = new LinkedHashMap<>(it.answers());
+        Decision decision = it.decision();
+        org.eclipse.swt.graphics.Point cs = scoreCanvas.getSize();
+        estimator.submit(() -> estimateAndHandOver(it, l, missing, answersNow, decision, null, showSky, null, cs));
+    }
+
+    /**
+     * Runs on the estimator thread: the missing answers, the score chart drawn at the canvas size
+     * and, when {@code lines} is given, the spectrum chart again at the estimated z; then hands
+     * them over.
+     */
+    private void estimateAndHandOver(QueueItem it, Backend.Loaded l, List<String> missing, Map<String, MachineAnswer> answersNow,
+            Decision decision, List<RestLine> lines, boolean sky, org.eclipse.swt.graphics.Point ss, org.eclipse.swt.graphics.Point cs) {
+        Map<String, MachineAnswer> answers = estimate(l, missing);
+        Map<String, MachineAnswer> all = new LinkedHashMap<>(answersNow);
+        all.putAll(answers);
+        double z = zOf(decision, all);
+        Ready r = null;
+        try {
+            r = new Ready(lines == null ? null : prepareSpectrum(l, lines, z, sky, ss), prepareScores(all, z, cs), z, sky);
+        } catch (RuntimeException e) {
+            // drawn on the UI thread when shown
+        }
+        Ready drawn = r;
+        handOver(() -> estimated(it, answers, drawn));
+    }
+
+    /** The answers of an item have come (UI thread). */
+    private void estimated(QueueItem it, Map<String, MachineAnswer> answers, Ready drawn) {
+        estimating.remove(it);
+        it.answers().putAll(answers);
+        refreshRow(it);
+        if (shown == it) {
+            double z = it.currentZ();
+            if (!sameZ(z, shownZ)) {
+                preview(z);
+            }
+            drawScores(it, drawn != null && sameZ(drawn.z(), z) ? drawn.score() : null, true);
+        } else if (drawn != null && drawn.spectrum() != null) {
+            ready.put(it, drawn);
+        }
+    }
+
+    private Map<String, MachineAnswer> estimate(Backend.Loaded l, List<String> ids) {
+        Map<String, MachineAnswer> answers = new LinkedHashMap<>();
+        for (String id : ids) {
+            try {
+                answers.put(id, backend.estimate(id, l.spectrum()));
+            } catch (RuntimeException e) {
+                answers.put(id, MachineAnswer.failed(id, "estimator '" + id + "' failed: " + e));
+            }
+        }
+        return answers;
+    }
+
+    /** The z an item would show with these answers: the decision's, else the first answer's best. */
+    private static double zOf(Decision d, Map<String, MachineAnswer> answers) {
+        if (d != null) {
+            return d.z();
+        }
+        MachineAnswer a = answers.isEmpty() ? null : answers.values().iterator().next();
+        return a != null && a.ok() ? a.z() : Double.NaN;
+    }
+
+    /** Runs on the UI thread later, unless the window has gone. */
+    private void handOver(Runnable r) {
+        if (display.isDisposed()) {
+            return;
+        }
+        display.asyncExec(() -> {
+            if (!shell.isDisposed()) {
+                r.run();
+            }
+        });
+    }
+
+    private void loadFailed(QueueItem it, String why) {
+        pending.remove(it);
+        estimating.remove(it);
+        it.problem(why);
+        message(why);
+        refreshRow(it);
+        if (shown == it) {
+            drawProblem(it);
+        }
+    }
+
+    /** An item has been read (UI thread): kept, and shown if it is the current one. */
+    private void arrived(QueueItem it, Backend.Loaded loaded, Ready ahead) {
+        pending.remove(it);
+        cache.put(it, loaded);
+        if (loaded.spectrum().metadata().objectId().isPresent()) {
+            it.id(loaded.spectrum().metadata().objectId().get());
+        }
+        refreshRow(it);
+        if (ahead != null) {
+            ready.put(it, ahead);
+        }
+        if (shown == it) {
+            showCurrent();
+        }
+    }
+
+    private void refreshRow(QueueItem it) {
+        int row = queue.view().indexOf(it);
+        if (row >= 0) {
+            queueTable.clear(row);
+        }
+    }
+
+    private static ChartCanvas.Prepared prepareSpectrum(Backend.Loaded l, List<RestLine> lines, double z, boolean sky,
+            org.eclipse.swt.graphics.Point size) {
+        JFreeChart c = spectrumChart(l, lines, z, sky);
+        return size.x > 0 && size.y > 0 ? ChartCanvas.prepare(c, size.x, size.y) : new ChartCanvas.Prepared(c, null, null, 0);
+    }
+
+    private static ChartCanvas.Prepared prepareScores(Map<String, MachineAnswer> answers, double z, org.eclipse.swt.graphics.Point size) {
+        JFreeChart c = scoreChart(answers, z);
+        return size.x > 0 && size.y > 0 ? ChartCanvas.prepare(c, size.x, size.y) : new ChartCanvas.Prepared(c, null, null, 0);
+    }
+
+    private static JFreeChart spectrumChart(Backend.Loaded l, List<RestLine> lines, double z, boolean sky) {
+        Spectrum s = l.spectrum();
+        SpectrumChart sc = SpectrumChart.of(s).restLines(lines, z).foundLines(l.found());
+        if (sky && l.skyFlux() != null) {
+            sc.sky(s.axis().vacuumAngstrom(), l.skyFlux());
+        }
+        return sc.build();
+    }
+
+    private static JFreeChart scoreChart(Map<String, MachineAnswer> answers, double z) {
+        ScoreChart score = ScoreChart.create().current(z);
+        for (MachineAnswer a : answers.values()) {
+            if (a.curve() != null) {
+                double[] alts = a.alternatives().stream().mapToDouble(Double::doubleValue).toArray();
+                score.curve(a.estimator(), a.curve().z(), a.curve().score(), a.curve().scoreName(), a.curve().lowerIsBetter(), alts);
+            }
+        }
+        return score.build();
+    }
+
+    /** The rest-frame lines to draw and name (asked once; again after a bundle is installed). */
+    private List<RestLine> restLines() {
+        if (restLines == null) {
+            restLines = List.copyOf(backend.lines());
+        }
+        return restLines;
     }
 
     private void drawProblem(QueueItem it) {
@@ -597,34 +808,102 @@ final class WorkbenchWindow {
     /** Builds both charts for a loaded item and paints them now; returns the milliseconds spent. */
     double draw(QueueItem it, Backend.Loaded l) {
         long t0 = System.nanoTime();
+        drawSpectrum(it, l, null);
+        drawScores(it, null, false);
+        return (System.nanoTime() - t0) / 1e6;
+    }
+
+    /** Shows the spectrum of a loaded item (drawn ahead, or drawn now) and paints it at once. */
+    private void drawSpectrum(QueueItem it, Backend.Loaded l, ChartCanvas.Prepared ahead) {
         shownLoaded = l;
-        Spectrum s = l.spectrum();
         double z = it.currentZ();
         shownZ = z;
         shownFound = l.found();
-        SpectrumChart sc = SpectrumChart.of(s).restLines(backend.lines(), z).foundLines(shownFound);
-        if (l.skyFlux() != null) {
-            sc.sky(s.axis().vacuumAngstrom(), l.skyFlux());
+        if (ahead != null && ahead.pixels() != null) {
+            spectrumCanvas.setChart(ahead);
+        } else {
+            spectrumCanvas.setChart(ahead != null ? ahead.chart() : spectrumChart(l, restLines(), z, showSky), "");
         }
-        spectrumCanvas.setChart(sc.build(), "");
-        ScoreChart score = ScoreChart.create().current(z);
-        for (MachineAnswer a : it.answers().values()) {
-            if (a.curve() != null) {
-                double[] alts = a.alternatives().stream().mapToDouble(Double::doubleValue).toArray();
-                score.curve(a.estimator(), a.curve().z(), a.curve().score(), a.curve().scoreName(), a.curve().lowerIsBetter(), alts);
-            }
-        }
-        scoreCanvas.setChart(score.build(), "");
         headline.setText(headlineText(it, l));
         fillSolutions(it);
         showDecision(it);
         refreshPhysics(z);
         picked.setText("Click a feature in the spectrum.");
         lineChoice.removeAll();
-        spectrumCanvas.drawNow();
-        scoreCanvas.drawNow();
-        return (System.nanoTime() - t0) / 1e6;
+        spectrumCanvas.update();
+        spectrumShownAt = System.nanoTime();
     }
+
+    /**
+     * Shows the score curves of the item's answers (drawn ahead, or drawn now); with
+     * {@code refreshText} also the headline and the solutions (when the answers came after the spectrum).
+     */
+    private void drawScores(QueueItem it, ChartCanvas.Prepared ahead, boolean refreshText) {
+        if (ahead != null && ahead.pixels() != null) {
+            scoreCanvas.setChart(ahead);
+        } else {
+            scoreCanvas.setChart(ahead != null ? ahead.chart() : scoreChart(it.answers(), shownZ), "");
+        }
+        if (refreshText) {
+            if (shownLoaded != null) {
+                headline.setText(headlineText(it, shownLoaded));
+            }
+            fillSolutions(it);
+        }
+        scoreCanvas.update();
+        scoresShownAt = System.nanoTime();
+    }
+
+    /**
+     * Draws the sky spectrum under the object's (on its own axis, in the lower part of the plot)
+     * or hides it; keeps the current zoom.
+     */
+    void showSky(boolean on) {
+        showSky = on;
+        if (!skyToggle.isDisposed() && skyToggle.getSelection() != on) {
+            skyToggle.setSelection(on);
+        }
+        ready.clear();
+        QueueItem it = shown;
+        JFreeChart old = spectrumCanvas.chart();
+        if (it == null || shownLoaded == null || old == null) {
+            return;
+        }
+        if (on && shownLoaded.skyFlux() == null) {
+            message(it.id() + ": the file has no sky spectrum");
+        }
+        org.jfree.data.Range x = old.getXYPlot().getDomainAxis().getRange();
+        org.jfree.data.Range y = old.getXYPlot().getRangeAxis().getRange();
+        boolean zoomed = spectrumCanvas.zoomed();
+        JFreeChart c = spectrumChart(shownLoaded, restLines(), shownZ, on);
+        spectrumCanvas.setChart(c, "");
+        if (zoomed) {
+            c.getXYPlot().getDomainAxis().setRange(x);
+            c.getXYPlot().getRangeAxis().setRange(y);
+        }
+        if (Double.isFinite(pickedAngstrom)) {
+            markPicked(pickedAngstrom);
+        }
+        spectrumCanvas.markDirty();
+    }
+
+    /** True if the sky spectrum is drawn (when the file has one). */
+    boolean skyShown() {
+        return showSky;
+    }
+
+    /** When the spectrum now shown was painted (System.nanoTime), 0 while it is not. */
+    long spectrumShownAt() {
+        return spectrumShownAt;
+    }
+
+    /** When the score curves now shown were painted (System.nanoTime), 0 while they are not. */
+    long scoresShownAt() {
+        return scoresShownAt;
+    }
+
+    private long spectrumShownAt;
+    private long scoresShownAt;
 
     private String headlineText(QueueItem it, Backend.Loaded l) {
         StringBuilder b = new StringBuilder(it.id());
@@ -634,7 +913,8 @@ final class WorkbenchWindow {
         }
         MachineAnswer a = it.primary();
         if (a != null && a.ok()) {
-            b.append(String.format(Locale.ROOT, "  ·  %s z = %.5f ± %.5f, %s%s", a.estimator(), a.z(), a.zError(), a.objectClass(),
+            b.append(String.format(Locale.ROOT, "  ·  %s z = %.5f%s, %s%s", a.estimator(), a.z(),
+                    Double.isFinite(a.zError()) ? String.format(Locale.ROOT, " ± %.5f", a.zError()) : "", a.objectClass(),
                     a.grade().isEmpty() ? "" : ", grade " + a.grade()));
         } else if (a != null) {
             b.append("  ·  ").append(a.estimator()).append(" failed: ").append(a.error());
@@ -688,7 +968,7 @@ final class WorkbenchWindow {
             return;
         }
         shownZ = z;
-        SpectrumChart.placeRestLines(c, backend.lines(), z);
+        SpectrumChart.placeRestLines(c, restLines(), z);
         if (scoreCanvas.chart() != null) {
             ScoreChart.markCurrent(scoreCanvas.chart(), z);
         }
@@ -731,7 +1011,7 @@ final class WorkbenchWindow {
         }
         final double angstrom = snapped != null ? snapped.observedVacuumAngstrom() : clickedAngstrom;
         pickedAngstrom = angstrom;
-        List<RestLine> lines = new ArrayList<>(backend.lines());
+        List<RestLine> lines = new ArrayList<>(restLines());
         lines.removeIf(l -> Kinematics.redshiftFromLine(angstrom, l.restVacuumAngstrom()) < -0.01);
         // most likely first: the line that would put the object nearest the z shown now
         double now = Double.isFinite(shownZ) ? shownZ : 0;
@@ -749,6 +1029,12 @@ final class WorkbenchWindow {
         picked.setText(snapped != null
                 ? String.format(Locale.ROOT, "Line found at %.2f Å (vacuum, fitted centre; S/N %.1f). Which line is it?", angstrom, snapped.snr())
                 : String.format(Locale.ROOT, "Feature at %.2f Å (vacuum, as clicked). Which line is it?", angstrom));
+        markPicked(angstrom);
+        picked.getParent().layout();
+    }
+
+    /** Marks the picked wavelength in the spectrum (one marker; the previous one goes). */
+    private void markPicked(double angstrom) {
         JFreeChart c = spectrumCanvas.chart();
         if (c != null) {
             var ms = c.getXYPlot().getDomainMarkers(Layer.FOREGROUND);
@@ -765,7 +1051,6 @@ final class WorkbenchWindow {
             c.getXYPlot().addDomainMarker(0, vm, Layer.FOREGROUND, true);
             spectrumCanvas.markDirty();
         }
-        picked.getParent().layout();
     }
 
     /** Four pixels of the spectrum at this wavelength, or 3 Å when no spectrum is shown. */
@@ -951,6 +1236,7 @@ final class WorkbenchWindow {
     }
 
     void refreshBundles() {
+        restLines = null;
         bundleTable.removeAll();
         for (String[] s : backend.services()) {
             TableItem ti = new TableItem(bundleTable, SWT.NONE);
@@ -963,14 +1249,27 @@ final class WorkbenchWindow {
         }
     }
 
-    /** Installs a bundle jar; a failure is a message in the window, nothing else changes. */
+    /**
+     * Installs a bundle jar and shows the Bundles panel with its services; a failure is a message
+     * in the window, nothing else changes.
+     */
     void install(Path jar) {
         try {
+            List<String> before = backend.estimators();
             message(backend.install(jar));
+            for (String id : backend.estimators()) {
+                if (!before.contains(id)) {
+                    message("estimator '" + id + "' is now installed (see Bundles); compare it with --estimators " + id
+                            + (estimatorIds.isEmpty() ? "" : "," + estimatorIds.get(0)));
+                }
+            }
         } catch (IOException | RuntimeException e) {
             message("bundle " + jar.getFileName() + " was not installed: " + e.getMessage());
         }
         refreshBundles();
+        if (!panels.isDisposed()) {
+            panels.setSelection(1);
+        }
     }
 
     // ------------------------------------------------------------------ files
@@ -1053,6 +1352,7 @@ final class WorkbenchWindow {
             handled = true;
             switch (Character.toLowerCase(e.character)) {
                 case 'u' -> nextUndecided();
+                case 'y' -> showSky(!showSky);
                 case 'x' -> decide(Verdict.NO_REDSHIFT, Double.NaN, "", "");
                 case 's' -> regrade(PersonGrade.SECURE);
                 case 'k' -> regrade(PersonGrade.LIKELY);
@@ -1124,11 +1424,11 @@ final class WorkbenchWindow {
 
     /** True while the item on screen is still being read or estimated. */
     boolean drawPending() {
-        return shown != null && pending.contains(shown);
+        return shown != null && (pending.contains(shown) || estimating.contains(shown));
     }
 
-    /** True while work is queued or running on the worker (tests wait for it). */
+    /** True while work is queued or running on the reader or estimator (tests wait for it). */
     boolean busy() {
-        return !pending.isEmpty();
+        return !pending.isEmpty() || !estimating.isEmpty();
     }
 }

@@ -228,6 +228,82 @@ class WorkbenchUiTest {
         Files.deleteIfExists(broken);
     }
 
+    /**
+     * Real pointer events through xdotool: the mouse wheel zooms the wavelength axis about the
+     * pointer (one notch up = 0.8 of the range, the wavelength under the pointer stays put), a left
+     * drag pans by the distance dragged, a double click restores the full view. The sky spectrum of
+     * spec-0266-51630-0168.fits (SDSS public data release, HDU 1 COADD column {@code sky}) is drawn
+     * on its own axis and the Y key hides and shows it again.
+     */
+    @Test
+    void wheelZoomDragPanAndSky() throws Exception {
+        Path file = SharedData.realData().resolve("spec-0266-51630-0168.fits");
+        try (Journal journal = Journal.open(Path.of("target", "ui-journal-zoom-" + System.nanoTime() + ".jsonl"))) {
+            WorkbenchWindow w = open(new TestBackend(), journal, List.of(file));
+            w.shell().forceActive();
+            pump(100);
+            ChartCanvas c = w.spectrumCanvas();
+            org.jfree.chart.plot.XYPlot plot = c.chart().getXYPlot();
+            assertNotNull(plot.getRangeAxis(1), "sky drawn on its own axis");
+            assertEquals("Sky", plot.getRangeAxis(1).getLabel());
+            w.snapshot(SHOTS.resolve("8-sky-shown.png"));
+            key(0, 'y');
+            assertFalse(w.skyShown());
+            assertEquals(null, w.spectrumCanvas().chart().getXYPlot().getRangeAxis(1), "sky hidden");
+            w.snapshot(SHOTS.resolve("9-sky-hidden.png"));
+            key(0, 'y');
+            assertTrue(w.skyShown());
+            assertNotNull(w.spectrumCanvas().chart().getXYPlot().getRangeAxis(1), "sky back");
+            pump(200);
+
+            plot = c.chart().getXYPlot();
+            org.jfree.data.Range before = plot.getDomainAxis().getRange();
+            int px = c.getSize().x * 2 / 3;
+            int py = c.getSize().y / 2;
+            double anchor = c.xValueAt(px);
+            assertTrue(Double.isFinite(anchor), "pointer inside the plot");
+            Point p = c.toDisplay(px, py);
+            HeadlessDisplay.xdotool("mousemove", Integer.toString(p.x), Integer.toString(p.y));
+            pump(100);
+            HeadlessDisplay.xdotool("click", "4");
+            pump(400);
+            org.jfree.data.Range zoomed = plot.getDomainAxis().getRange();
+            assertEquals(0.8 * before.getLength(), zoomed.getLength(), 1e-6 * before.getLength(), "one wheel notch: 0.8 of the range");
+            assertEquals(anchor, c.xValueAt(px), 1e-6 * before.getLength() + 2 * zoomed.getLength() / c.getSize().x,
+                    "the wavelength under the pointer stays under it");
+            w.snapshot(SHOTS.resolve("10-wheel-zoomed.png"));
+
+            // drag 200 pixels to the right: the view moves 200 pixels' worth of wavelength to the blue
+            double perPixel = zoomed.getLength() / dataWidth(c);
+            HeadlessDisplay.xdotool("mousedown", "1");
+            for (int k = 1; k <= 10; k++) {
+                HeadlessDisplay.xdotool("mousemove", Integer.toString(p.x + 20 * k), Integer.toString(p.y));
+                pump(30);
+            }
+            HeadlessDisplay.xdotool("mouseup", "1");
+            pump(400);
+            org.jfree.data.Range panned = plot.getDomainAxis().getRange();
+            assertEquals(zoomed.getLength(), panned.getLength(), 1e-6 * zoomed.getLength(), "a pan keeps the zoom");
+            assertEquals(200 * perPixel, zoomed.getLowerBound() - panned.getLowerBound(), 3 * perPixel,
+                    "the view moved by the 200 pixels dragged");
+            assertTrue(Double.isNaN(w.pickedAngstrom()), "a drag is not a click: nothing picked");
+            w.snapshot(SHOTS.resolve("11-dragged.png"));
+
+            HeadlessDisplay.xdotool("click", "--repeat", "2", "--delay", "60", "1");
+            pump(400);
+            assertEquals(before, plot.getDomainAxis().getRange(), "double click: the full view again");
+            w.shell().close();
+            pump(100);
+        }
+    }
+
+    private static double dataWidth(ChartCanvas c) {
+        double a = c.xValueAt(c.getSize().x / 2);
+        double b = c.xValueAt(c.getSize().x / 2 + 100);
+        org.jfree.data.Range r = c.chart().getXYPlot().getDomainAxis().getRange();
+        return r.getLength() / ((b - a) / 100);
+    }
+
     /** A catalogue whose spectra have moved: each row says so in the window, the rest loads. */
     @Test
     void catalogueWithMovedSpectra() throws Exception {

@@ -26,7 +26,7 @@ import nom.tam.fits.ImageHDU;
  * MASK, or as the profile says), the wavelength from keywords or from its own HDU
  * (EXTNAME WAVELENGTH; 1D for all rows or 2D per row; values below 10 are read as log10);</li>
  * <li>a 2D image whose rows are planes of one spectrum (profile setting {@code layout = image-planes}
- * with {@code flux.row}, {@code ivar.row} / {@code error.row}, {@code mask.row}, 0-based).</li>
+ * with {@code flux.row}, {@code ivar.row} / {@code error.row}, {@code mask.row}, {@code sky.row}, 0-based).</li>
  * </ul>
  * Rows are read one at a time from disk.
  */
@@ -206,6 +206,7 @@ final class ImageSpectra implements Plan {
         ErrorKind kind = errorKind;
         String errName = "";
         String maskName = "";
+        double[] sky = null;
         if (planes) {
             int fr = settings.integer("flux.row").orElse(0);
             flux = row(hdu, fr, "flux row " + fr);
@@ -224,6 +225,13 @@ final class ImageSpectra implements Plan {
             if (mr.isPresent()) {
                 mask = row(hdu, mr.get(), "mask row");
                 maskName = "mask row " + mr.get();
+            }
+            Optional<Integer> kr = settings.integer("sky.row");
+            if (kr.isPresent()) {
+                sky = row(hdu, kr.get(), "sky row");
+                if (sky.length != flux.length) {
+                    throw new IllegalArgumentException("sky row " + kr.get() + " has " + sky.length + " values but the flux has " + flux.length);
+                }
             }
         } else {
             flux = row(hdu, index, "flux");
@@ -284,7 +292,7 @@ final class ImageSpectra implements Plan {
         }
         return SpectrumAssembly.build(axis, flux, err, kind, mask, fluxUnit, b.build(),
                 settings.profile().map(p -> p.maskedRegionsVacuumAngstrom()).orElse(List.of()),
-                "the flux", errName, maskName);
+                "the flux", errName, maskName).withSky(sky);
     }
 
     private int rowsOf(int i) {

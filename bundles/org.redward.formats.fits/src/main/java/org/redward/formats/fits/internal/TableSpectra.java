@@ -27,7 +27,7 @@ import nom.tam.fits.Header;
  * <p>Profile settings used: {@code hdu}, {@code wavelength.column}, {@code wavelength.scale}
  * (linear, log10, ln), {@code wavelength.unit}, {@code medium}, {@code flux.column},
  * {@code flux.unit}, {@code ivar.column} / {@code error.column} / {@code variance.column},
- * {@code mask.column}, {@code id.column}; without them common column names are tried
+ * {@code mask.column}, {@code sky.column}, {@code id.column}; without them common column names are tried
  * ({@link ColumnNames}).
  */
 final class TableSpectra implements Plan {
@@ -54,6 +54,7 @@ final class TableSpectra implements Plan {
     private Optional<Column> err;
     private ErrorKind kind;
     private Optional<Column> maskCol;
+    private Optional<Column> skyCol;
     private Optional<Column> wave;
     private Optional<Column> idCol;
     private Optional<Column> raCol;
@@ -197,6 +198,11 @@ final class TableSpectra implements Plan {
         int n = f.length;
         double[] e = err.isPresent() && (!own || OwnFormat.hasErrors(h)) ? column(t, h, err.get(), row) : null;
         double[] m = maskCol.isPresent() ? column(t, h, maskCol.get(), row) : null;
+        double[] sky = skyCol.isPresent() ? column(t, h, skyCol.get(), row) : null;
+        if (sky != null && sky.length != n) {
+            throw new IllegalArgumentException("column '" + skyCol.get().name() + "' has " + sky.length + " values but column '"
+                    + flux.name() + "' has " + n);
+        }
         double[] coords;
         SpectralUnit unit;
         Sampling sampling;
@@ -264,7 +270,7 @@ final class TableSpectra implements Plan {
             mediumSource = keywordMediumSource;
         }
         org.redward.spectrum.SpectralAxis axis = coords == null ? keywordAxis : SpectrumAssembly.axis(coords, unit, medium, sampling);
-        return finish(axis, h, t, keys, f, e, m, row, mediumSource);
+        return finish(axis, h, t, keys, f, e, m, row, mediumSource).withSky(sky);
     }
 
     /** Chooses the columns of a table HDU (profile settings first, then the usual names). */
@@ -285,6 +291,7 @@ final class TableSpectra implements Plan {
             kind = ErrorKind.VARIANCE;
         }
         maskCol = pick(names, settings, "mask.column", ColumnNames.MASK, where);
+        skyCol = pick(names, settings, "sky.column", ColumnNames.SKY, where);
         wave = pick(names, settings, "wavelength.column", ColumnNames.WAVELENGTH, where);
         idCol = rowPerSpectrum ? pick(names, settings, "id.column", ColumnNames.ID, where) : Optional.empty();
         // one object per row: its own sky position (ICRS degrees) beats the header's pointing

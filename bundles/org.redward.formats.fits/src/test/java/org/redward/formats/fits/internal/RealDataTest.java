@@ -129,6 +129,61 @@ class RealDataTest {
         }
     }
 
+    /**
+     * The sky spectrum of spec-0266-51630-0168.fits (Sloan Digital Sky Survey public data release,
+     * HDU 1 COADD, column {@code sky}, 1e-17 erg/s/cm2/Angstrom like {@code flux}; see the
+     * realdata README) comes through the sdss-coadd profile pixel for pixel, as nom-tam-fits reads
+     * the column directly. The brightest night-sky line, [O I] 5577.34 Angstrom in air (5578.89
+     * vacuum; from memory, common practice), stands far above the sky's median there. Files
+     * without a sky (LAMOST DR1 five-row images, the 3C433 long-slit image) have none.
+     */
+    @Test
+    void skySpectrumOfASurveyCoadd() throws Exception {
+        Path p = SharedData.realData().resolve("spec-0266-51630-0168.fits");
+        for (Optional<InstrumentProfile> profile : List.of(Optional.of(SurveyProfiles.load("sdss-coadd")), Optional.<InstrumentProfile>empty())) {
+            Spectrum s = readAll(p, profile).get(0).spectrum().orElseThrow();
+            assertTrue(s.hasSky(), "sky column read" + (profile.isEmpty() ? " by its usual name" : ""));
+            double[] sky = s.sky();
+            float[] direct;
+            try (nom.tam.fits.Fits f = new nom.tam.fits.Fits(p.toFile())) {
+                nom.tam.fits.BinaryTableHDU t = (nom.tam.fits.BinaryTableHDU) f.getHDU(1);
+                direct = (float[]) t.getData().getColumn(findColumn(t, "sky"));
+            }
+            assertEquals(direct.length, sky.length);
+            for (int i = 0; i < sky.length; i++) {
+                assertEquals(direct[i], sky[i], 0.0, "pixel " + i);
+            }
+            double[] wl = s.axis().vacuumAngstrom();
+            double peak = 0;
+            for (int i = 0; i < wl.length; i++) {
+                if (Math.abs(wl[i] - 5578.89) < 3) {
+                    peak = Math.max(peak, sky[i]);
+                }
+            }
+            double[] sorted = sky.clone();
+            java.util.Arrays.sort(sorted);
+            double median = sorted[sorted.length / 2];
+            assertTrue(peak > 5 * median, "[O I] 5577 night-sky line in the sky spectrum: peak " + peak + ", median " + median);
+            // the object's flux is not the sky: the sky is for display only
+            assertFalse(java.util.Arrays.equals(s.flux(), sky));
+        }
+        Spectrum lamost = readAll(SharedData.realData().resolve("spec-55862-B6212_sp06-093.fits"),
+                Optional.of(SurveyProfiles.load("lamost-dr1"))).get(0).spectrum().orElseThrow();
+        assertFalse(lamost.hasSky(), "the LAMOST five-row image has no sky row");
+        Spectrum slit = readAll(SharedData.realData().resolve("3C433.fits"), Optional.empty()).get(0).spectrum().orElseThrow();
+        assertFalse(slit.hasSky());
+        assertEquals(null, slit.sky());
+    }
+
+    private static int findColumn(nom.tam.fits.BinaryTableHDU t, String name) {
+        for (int i = 0; i < t.getNCols(); i++) {
+            if (name.equalsIgnoreCase(t.getColumnName(i).trim())) {
+                return i;
+            }
+        }
+        throw new AssertionError("no column " + name);
+    }
+
     @Test
     void metadataOfAFiveRowImage() throws Exception {
         Path p = SharedData.realData().resolve("spec-55862-B6212_sp06-093.fits");
