@@ -127,6 +127,10 @@ public final class Dispatcher implements Function<String[], Integer> {
             err.println("redward: unknown command '" + word + "' (commands: " + String.join(", ", available()) + ")");
             return 2;
         }
+        if (rest.size() == 1 && (rest.get(0).equals("--version") || rest.get(0).equals("-V"))) {
+            ctx.out().println("redward " + ctx.productVersion() + " (" + word + " from " + r.bundle() + ")");
+            return 0;
+        }
         try {
             Command command = bundleContext.getService(r.ref());
             if (command == null) {

@@ -22,6 +22,7 @@ import org.redward.api.commands.PlatformInfo;
 import org.redward.api.commands.PlatformInfo.BundleRecord;
 import org.redward.api.registry.Provided;
 import org.redward.api.registry.ProviderRegistry;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -59,14 +60,7 @@ public final class PluginsCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        cl.parseArgs(arguments.toArray(new String[0]));
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
-            return 0;
-        }
-        if (cl.isVersionHelpRequested()) {
-            ctx.out().println(platform.productVersion());
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         if (a.verify) {

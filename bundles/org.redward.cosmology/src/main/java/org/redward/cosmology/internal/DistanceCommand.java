@@ -35,6 +35,7 @@ import org.redward.api.frames.SolarMotion;
 import org.redward.api.frames.VelocityConvention;
 import org.redward.api.registry.Provided;
 import org.redward.spectrum.SpectrumMetadata;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -121,15 +122,7 @@ public final class DistanceCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        cl.setUnmatchedOptionsArePositionalParams(true);
-        cl.parseArgs(arguments.toArray(new String[0]));
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
-            return 0;
-        }
-        if (cl.isVersionHelpRequested()) {
-            ctx.out().println("distance");
+        if (!CommandOptions.parse(new CommandLine(a).setUnmatchedOptionsArePositionalParams(true), arguments, ctx.out())) {
             return 0;
         }
         CosmologyParameters params = parameters(a);

@@ -30,6 +30,7 @@ import org.redward.api.lines.LineSearch;
 import org.redward.api.lines.RedshiftHypothesis;
 import org.redward.api.registry.Provided;
 import org.redward.spectrum.Spectrum;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -86,10 +87,7 @@ public final class LinesCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        cl.parseArgs(arguments.toArray(new String[0]));
-        if (cl.isUsageHelpRequested() || cl.isVersionHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         FinderSettings fs = finderSettings(a);

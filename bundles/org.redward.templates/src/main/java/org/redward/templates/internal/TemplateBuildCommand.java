@@ -62,14 +62,7 @@ final class TemplateBuildCommand {
 
     static int run(CommandContext ctx, List<String> arguments, SpectrumInputs inputs) throws IOException {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException("build: " + e.getMessage());
-        }
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
+        if (TemplatesCommand.parse(ctx, a, arguments) == null) {
             return 0;
         }
         if (a.components < 1 || !(a.step > 0) || !(a.coverage > 0 && a.coverage <= 1)) {

@@ -26,6 +26,7 @@ import org.redward.api.templates.Template;
 import org.redward.api.templates.TemplateRegistry;
 import org.redward.api.templates.TemplateSet;
 import org.redward.spectrum.ObjectClass;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -120,18 +121,13 @@ public final class TemplatesCommand implements Command {
         }
     }
 
-    private static <T> T parse(CommandContext ctx, T args, List<String> arguments) {
-        CommandLine cl = new CommandLine(args);
+    /** Parses a sub-command's options; bad ones are reported with the sub-command's name. Null after --help. */
+    static <T> T parse(CommandContext ctx, T args, List<String> arguments) {
         try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException(cl.getCommandName() + ": " + e.getMessage());
+            return CommandOptions.parse(args, arguments, ctx.out()) ? args : null;
+        } catch (UsageException e) {
+            throw new UsageException(new CommandLine(args).getCommandName() + ": " + e.getMessage());
         }
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
-            return null;
-        }
-        return args;
     }
 
     private static final java.util.regex.Pattern TEMPLATE_FILE =

@@ -32,6 +32,7 @@ import org.redward.api.lines.LineListRegistry;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.registry.ProviderRegistry;
 import org.redward.api.templates.TemplateRegistry;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -171,14 +172,7 @@ public final class WorkbenchCommand implements Command {
     private int run(CommandContext ctx, List<String> arguments, long started, long startedEpochMs, CompletableFuture<Display> early,
             long[] displayEpochMs) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException(e.getMessage());
-        }
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         int[] wh = parseSize(a.size);

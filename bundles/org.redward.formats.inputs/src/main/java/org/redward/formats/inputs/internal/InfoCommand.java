@@ -19,6 +19,7 @@ import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.formats.SpectrumRecord;
 import org.redward.spectrum.Spectrum;
 import org.redward.spectrum.SpectrumMetadata;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -56,10 +57,7 @@ public final class InfoCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        cl.parseArgs(arguments.toArray(new String[0]));
-        if (cl.isUsageHelpRequested() || cl.isVersionHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         if (!(a.timeLimit > 0) || a.timeLimit > 86400) {
