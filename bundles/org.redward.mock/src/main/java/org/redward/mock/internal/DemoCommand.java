@@ -94,9 +94,9 @@ public final class DemoCommand implements Command {
         if (a.size < 1) {
             throw new UsageException("--size " + a.size + ": the survey needs at least 1 fibre");
         }
-        if (a.size > MAX_DEMO_SIZE) {
+        if (a.size > MAX_DEMO_SIZE && !a.generateOnly) {
             throw new UsageException("--size " + a.size + " is more than the demo's limit of " + MAX_DEMO_SIZE
-                    + " fibres; for large mock surveys use 'redward accuracy --size N'");
+                    + " fibres; for large mock surveys use 'redward accuracy --size N' (or --generate-only, which has no limit)");
         }
         if (a.threads < 1) {
             throw new UsageException("--threads " + a.threads + ": at least 1");
