@@ -49,14 +49,14 @@ import org.redward.api.survey.SurveyMeasurer;
  * {@value #DEFAULT_SPECTRA_PER_TASK}; see {@link #tasks}); each task (one slice) boots, once per
  * executor JVM, the embedded platform from the same bundles that {@code measure} uses, and
  * measures its slice through the {@link SurveyMeasurer} service exactly as {@code measure} does,
- * reading through the same reading facade (so a task holds at most one slice's rows). The catalogue has the same columns as {@code measure}'s and is written as
- * Parquet ({@code catalog.parquet} in the output folder) through Spark's output committer, so a
+ * reading through the same reading facade (so a task holds at most one slice's rows). The
+ * catalogue has the same columns as {@code measure}'s and is written as Parquet ({@code catalog.parquet} in the output folder) through Spark's output committer, so a
  * retried task never duplicates rows; {@code provenance.json} beside it names every bundle with
  * its SHA-256, the job's parameters and the input files.
  *
  * <p>Arguments: {@code --bundles DIR --out DIR [--master URL] [--estimator ID] [--templates ID]
- * [--profile ID] [--frame F] [--cosmology ID] [--time-limit-s S] [--spectra-per-task K] INPUTS...} (INPUTS: files or
- * folders, local paths or any URI the Hadoop file system layer reads).
+ * [--profile ID] [--frame F] [--cosmology ID] [--time-limit-s S] [--spectra-per-task K] INPUTS...}
+ * (INPUTS: files, folders or list files, local paths or any URI the Hadoop file system layer reads).
  */
 public final class SurveyJob {
 
