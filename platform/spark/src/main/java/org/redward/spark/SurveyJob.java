@@ -31,10 +31,12 @@ import org.apache.spark.sql.types.DataType;
 import org.apache.spark.sql.types.DataTypes;
 import org.apache.spark.sql.types.StructField;
 import org.apache.spark.sql.types.StructType;
+import org.apache.spark.util.CollectionAccumulator;
 import org.redward.api.catalog.CatalogTable;
 import org.redward.api.catalog.Column;
 import org.redward.api.commands.Json;
 import org.redward.api.commands.PlatformInfo;
+import org.redward.api.formats.ReadOptions;
 import org.redward.api.formats.ReaderRegistry;
 import org.redward.api.formats.SpectrumInputs;
 import org.redward.api.survey.MeasureRequest;
@@ -42,20 +44,28 @@ import org.redward.api.survey.MeasuredRow;
 import org.redward.api.survey.SurveyMeasurer;
 
 /**
- * The survey-scale measurement on Apache Spark. The driver lists the input files; each task
- * boots (once per executor JVM) the embedded platform from the same bundles that {@code measure}
- * uses, and measures its files through the {@link SurveyMeasurer} service exactly as
- * {@code measure} does, one spectrum at a time (streaming: a task holds one spectrum and the
- * rows of its files). The catalogue has the same columns as {@code measure}'s and is written as
- * Parquet ({@code catalog.parquet} in the output folder) through Spark's output committer, so a
+ * The survey-scale measurement on Apache Spark. The driver lists the input files and cuts them
+ * into slices of at most {@code --spectra-per-task} spectra (default
+ * {@value #DEFAULT_SPECTRA_PER_TASK}; see {@link #tasks}); each task (one slice) boots, once per
+ * executor JVM, the embedded platform from the same bundles that {@code measure} uses, and
+ * measures its slice through the {@link SurveyMeasurer} service exactly as {@code measure} does,
+ * reading through the same reading facade (so a task holds at most one slice's rows). The
+ * catalogue has the same columns as {@code measure}'s and is written as Parquet ({@code catalog.parquet} in the output folder) through Spark's output committer, so a
  * retried task never duplicates rows; {@code provenance.json} beside it names every bundle with
  * its SHA-256, the job's parameters and the input files.
  *
  * <p>Arguments: {@code --bundles DIR --out DIR [--master URL] [--estimator ID] [--templates ID]
- * [--profile ID] [--frame F] [--cosmology ID] [--time-limit-s S] INPUTS...} (INPUTS: files or
- * folders, local paths or any URI the Hadoop file system layer reads).
+ * [--profile ID] [--frame F] [--cosmology ID] [--time-limit-s S] [--spectra-per-task K] INPUTS...}
+ * (INPUTS: files, folders or list files, local paths or any URI the Hadoop file system layer reads).
  */
 public final class SurveyJob {
+
+    /**
+     * The most spectra one task measures unless {@code --spectra-per-task} says otherwise: small
+     * enough that a task's rows and a retry stay cheap, large enough that Spark's per-task cost
+     * (a few milliseconds) is lost in the measuring time (tens of milliseconds per spectrum).
+     */
+    public static final int DEFAULT_SPECTRA_PER_TASK = 200;
 
     /** Catalogue columns that describe the run, not the spectrum; they differ between runs by nature. */
     public static final List<String> RUN_COLUMNS = List.of("sequence", "seconds");
@@ -69,6 +79,7 @@ public final class SurveyJob {
         String bundles;
         String out;
         String master;
+        int spectraPerTask = DEFAULT_SPECTRA_PER_TASK;
         final Map<String, String> options = new LinkedHashMap<>();
         final List<String> inputs = new ArrayList<>();
 
@@ -85,6 +96,16 @@ public final class SurveyJob {
                         case "--bundles": a.bundles = v; break;
                         case "--out": a.out = v; break;
                         case "--master": a.master = v; break;
+                        case "--spectra-per-task":
+                            try {
+                                a.spectraPerTask = Integer.parseInt(v);
+                            } catch (NumberFormatException e) {
+                                a.spectraPerTask = 0;
+                            }
+                            if (a.spectraPerTask < 1) {
+                                throw new IllegalArgumentException("--spectra-per-task " + v + ": expected a whole number >= 1");
+                            }
+                            break;
                         case "--estimator": case "--templates": case "--profile": case "--frame": case "--cosmology":
                         case "--time-limit-s":
                             a.options.put(s.substring(2), v);
@@ -142,11 +163,16 @@ public final class SurveyJob {
     }
 
     /** What a run did. */
-    public record Summary(long files, long rows, long failed, double seconds, double bootSeconds, Path catalog) {
+    public record Summary(long files, long rows, long failed, double seconds, double bootSeconds, Path catalog,
+            Map<String, Double> executorBootSeconds) {
         @Override
         public String toString() {
+            StringBuilder boots = new StringBuilder();
+            executorBootSeconds.forEach((jvm, s) -> boots.append(boots.length() == 0 ? "" : ", ")
+                    .append(String.format(Locale.ROOT, "%s %.2f s", jvm, s)));
             return String.format(Locale.ROOT, "redward on Spark: %d spectra from %d files (%d failed) in %.1f s"
-                    + " (platform boot on the driver %.2f s); catalogue %s", rows, files, failed, seconds, bootSeconds, catalog);
+                    + " (platform boot on the driver %.2f s); catalogue %s%nframework boot per executor JVM: %s", rows, files,
+                    failed, seconds, bootSeconds, catalog, boots.length() == 0 ? "none reported" : boots);
         }
     }
 
@@ -155,17 +181,24 @@ public final class SurveyJob {
         long t0 = System.nanoTime();
         Configuration hadoop = spark.sparkContext().hadoopConfiguration();
         EmbeddedRedward driver = EmbeddedRedward.get(localBundles(args.bundles));
-        List<String> files = listInputs(args.inputs, hadoop, driver.service(ReaderRegistry.class, null));
+        SpectrumInputs facade = driver.service(SpectrumInputs.class, null);
+        List<String> files = listInputs(args.inputs, hadoop, driver.service(ReaderRegistry.class, null), facade);
         SurveyMeasurer measurer = driver.service(SurveyMeasurer.class, null);
         MeasureRequest probe = args.request(List.of());
         List<Column> columns = measurer.table(probe, List.of(), 0).columns();
         StructType schema = schema(columns);
 
         JavaSparkContext jsc = JavaSparkContext.fromSparkContext(spark.sparkContext());
-        int slices = Math.max(1, Math.min(files.size(), jsc.defaultParallelism() * 4));
-        JavaRDD<String> fileRdd = jsc.parallelize(files, slices);
+        List<String> tasks = tasks(files, facade, args);
+        // one partition (one task) per slice: no task measures more than spectraPerTask spectra
+        JavaRDD<String> fileRdd = jsc.parallelize(tasks, Math.max(1, tasks.size()));
         final Args shipped = args;
-        JavaRDD<Row> rows = fileRdd.mapPartitions(it -> measurePartition(shipped, it));
+        CollectionAccumulator<String> boots = spark.sparkContext().collectionAccumulator("redward.platform.boot");
+        JavaRDD<Row> rows = fileRdd.mapPartitions(it -> {
+            Iterator<Row> measured = measurePartition(shipped, it);
+            boots.add(bootRecord(EmbeddedRedward.get(localBundles(shipped.bundles))));
+            return measured;
+        });
         Dataset<Row> table = spark.createDataFrame(rows, schema);
         Path outDir = Paths.get(args.out);
         String catalog = outDir.resolve("catalog.parquet").toString();
@@ -174,11 +207,65 @@ public final class SurveyJob {
         Dataset<Row> written = spark.read().parquet(catalog);
         long n = written.count();
         long failed = written.filter("status = 'failed'").count();
+        Map<String, Double> executorBoots = new java.util.TreeMap<>();
+        for (String b : boots.value()) {
+            int eq = b.lastIndexOf('=');
+            executorBoots.put(b.substring(0, eq), Double.parseDouble(b.substring(eq + 1)));
+        }
         writeProvenance(outDir, driver, args, files, n);
-        return new Summary(files.size(), n, failed, (System.nanoTime() - t0) / 1e9, driver.bootSeconds(), Paths.get(catalog));
+        return new Summary(files.size(), n, failed, (System.nanoTime() - t0) / 1e9, driver.bootSeconds(), Paths.get(catalog),
+                executorBoots);
     }
 
-    /** Runs on an executor: measures the files of one partition through the bundles' services. */
+    /**
+     * {@code executor <id> (pid <pid>)=<boot seconds>} of this JVM's platform.
+     * In local mode the executor is the driver's JVM and shares the driver's platform.
+     */
+    static String bootRecord(EmbeddedRedward platform) {
+        org.apache.spark.SparkEnv env = org.apache.spark.SparkEnv.get();
+        String id = env == null ? "?" : env.executorId();
+        return "executor " + id + " (pid " + ProcessHandle.current().pid() + ")=" + platform.bootSeconds();
+    }
+
+    /**
+     * The job's tasks in input order, each {@code first TAB count TAB file}: a local file whose
+     * reader knows its number of spectra up front (through the reading facade's
+     * {@link SpectrumInputs#counts}) is cut into slices of at most {@code args.spectraPerTask}
+     * spectra; any other file (remote, or a count unknown before reading) is one task with count -1
+     * (the whole file).
+     */
+    static List<String> tasks(List<String> files, SpectrumInputs facade, Args args) {
+        List<Path> local = new ArrayList<>();
+        for (String f : files) {
+            if (isLocal(f)) {
+                local.add(Paths.get(f));
+            }
+        }
+        ReadOptions read = ReadOptions.defaults();
+        if (args.options.containsKey("profile")) {
+            read = read.withProfile(args.options.get("profile"));
+        }
+        long[] counts = facade.counts(local, read);
+        List<String> out = new ArrayList<>();
+        int k = 0;
+        for (String f : files) {
+            long n = isLocal(f) && counts.length == local.size() ? counts[k++] : -1;
+            if (n <= 0) {
+                out.add("0\t-1\t" + f);
+                continue;
+            }
+            for (long first = 0; first < n; first += args.spectraPerTask) {
+                out.add(first + "\t" + Math.min(args.spectraPerTask, n - first) + "\t" + f);
+            }
+        }
+        return out;
+    }
+
+    private static boolean isLocal(String file) {
+        return !file.matches("^[a-zA-Z][a-zA-Z0-9+.-]*://.*") || file.startsWith("file:");
+    }
+
+    /** Runs on an executor: measures the slices of one partition through the bundles' services. */
     static Iterator<Row> measurePartition(Args args, Iterator<String> files) throws IOException {
         EmbeddedRedward platform = EmbeddedRedward.get(localBundles(args.bundles));
         SurveyMeasurer measurer = platform.service(SurveyMeasurer.class, null);
@@ -190,10 +277,16 @@ public final class SurveyJob {
         }
         List<Row> out = new ArrayList<>();
         while (files.hasNext()) {
-            String file = files.next();
+            String[] task = files.next().split("\t", 3);
+            long first = Long.parseLong(task[0]);
+            long count = Long.parseLong(task[1]);
+            String file = task[2];
             Path local = localCopy(file);
             List<MeasuredRow> measured = new ArrayList<>();
             MeasureRequest request = args.request(List.of(local));
+            if (count > 0) {
+                request = request.withSlice(first, count);
+            }
             measurer.measure(request, measured::add);
             CatalogTable t = measurer.table(request, measured, measured.size());
             int sourceColumn = t.columnIndex("source");
@@ -241,14 +334,24 @@ public final class SurveyJob {
         return tmp;
     }
 
-    /** Expands folders (one level, spectrum-like files) through the Hadoop file system layer. */
-    static List<String> listInputs(List<String> inputs, Configuration conf, ReaderRegistry readers) throws IOException {
+    /**
+     * Expands folders (one level, spectrum-like files) through the Hadoop file system layer, and
+     * local list files ({@code .list}, {@code .lst}, {@code @FILE}) by the reading facade's rule,
+     * as {@code measure} does.
+     */
+    static List<String> listInputs(List<String> inputs, Configuration conf, ReaderRegistry readers, SpectrumInputs facade)
+            throws IOException {
         List<String> out = new ArrayList<>();
         for (String in : inputs) {
             boolean remote = in.matches("^[a-zA-Z][a-zA-Z0-9+.-]*://.*") && !in.startsWith("file:");
             if (!remote) {
                 Path p = Paths.get(in.startsWith("file:") ? URI.create(in).getPath() : in).toAbsolutePath().normalize();
-                if (Files.isDirectory(p)) {
+                String name = p.getFileName() == null ? "" : p.getFileName().toString().toLowerCase(Locale.ROOT);
+                if (in.startsWith("@") || (Files.isRegularFile(p) && (name.endsWith(".list") || name.endsWith(".lst")))) {
+                    for (Path f : facade.expand(List.of(Paths.get(in)))) {
+                        out.add(f.toAbsolutePath().normalize().toString());
+                    }
+                } else if (Files.isDirectory(p)) {
                     try (var s = Files.list(p)) {
                         s.filter(Files::isRegularFile).filter(f -> readable(f, readers)).sorted()
                                 .forEach(f -> out.add(f.toString()));

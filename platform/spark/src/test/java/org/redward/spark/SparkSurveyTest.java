@@ -26,6 +26,8 @@ import org.redward.api.survey.SurveyMeasurer;
  * The survey job in Spark's {@code local[2]} mode gives the same catalogue as the single-machine
  * measurement through the same service, row for row (z equal to 1e-12: the code is the same),
  * with a task that fails on its first attempt and is retried by Spark without duplicating rows.
+ * The files hold 100 spectra each and the tasks at most 30, so every file is cut into slices
+ * (30, 30, 30, 10) whose rows must join up exactly.
  */
 class SparkSurveyTest {
 
@@ -55,7 +57,8 @@ class SparkSurveyTest {
     void sparkCatalogueEqualsSingleMachineCatalogue() throws Exception {
         Path inputs = TestSpectra.write(temp.resolve("spectra"));
         SurveyJob.Args args = SurveyJob.Args.parse(new String[] {"--bundles", bundles().toString(), "--out",
-                temp.resolve("out").toString(), "--estimator", TestSpectra.ESTIMATOR, "--time-limit-s", "600", inputs.toString()});
+                temp.resolve("out").toString(), "--estimator", TestSpectra.ESTIMATOR, "--time-limit-s", "600",
+                "--spectra-per-task", "30", inputs.toString()});
         System.setProperty("redward.spark.failFirstAttempt", "true");
         SurveyJob.Summary summary;
         try {

@@ -43,6 +43,19 @@ public interface SpectrumInputs {
      */
     List<Path> expand(List<Path> inputs);
 
+    /**
+     * How many spectra each file of the inputs holds, as its reader knows it without reading the
+     * spectra (e.g. a FITS table's row count), in the order of {@link #expand}: 0 for a folder's
+     * file that would be passed over, -1 where the count is unknown before reading (a reader that
+     * cannot tell, a file that cannot be opened). Much cheaper than reading: for progress totals
+     * and for splitting a survey into bounded tasks. Never throws for bad input.
+     */
+    default long[] counts(List<Path> inputs, ReadOptions options) {
+        long[] unknown = new long[expand(inputs).size()];
+        java.util.Arrays.fill(unknown, -1);
+        return unknown;
+    }
+
     /** A stream of records over many files. Close it to release files and reading threads. */
     interface Stream extends Iterator<SpectrumRecord>, AutoCloseable {
         /** Files completed so far (read through or failed). */

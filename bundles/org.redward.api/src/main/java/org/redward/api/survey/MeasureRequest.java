@@ -30,9 +30,12 @@ public final class MeasureRequest {
     private final Duration timeLimit;
     private final double zMin;
     private final double zMax;
+    private final long sliceFirst;
+    private final long sliceCount;
 
     private MeasureRequest(List<Path> inputs, String estimatorId, String templatesId, String profileId, String frame,
-            String cosmologyId, Path output, int threads, boolean resume, Duration timeLimit, double zMin, double zMax) {
+            String cosmologyId, Path output, int threads, boolean resume, Duration timeLimit, double zMin, double zMax,
+            long sliceFirst, long sliceCount) {
         this.inputs = List.copyOf(inputs);
         this.estimatorId = estimatorId;
         this.templatesId = templatesId;
@@ -45,45 +48,47 @@ public final class MeasureRequest {
         this.timeLimit = timeLimit;
         this.zMin = zMin;
         this.zMax = zMax;
+        this.sliceFirst = sliceFirst;
+        this.sliceCount = sliceCount;
     }
 
     /** Default estimator and templates, no profile, no frame correction, default cosmology, all cores, no file. */
     public static MeasureRequest of(List<Path> inputs) {
-        return new MeasureRequest(inputs, null, null, null, null, null, null, 0, false, DEFAULT_TIME_LIMIT, -0.005, 4.0);
+        return new MeasureRequest(inputs, null, null, null, null, null, null, 0, false, DEFAULT_TIME_LIMIT, -0.005, 4.0, 0, -1);
     }
 
     public MeasureRequest withInputs(List<Path> v) {
-        return new MeasureRequest(v, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(v, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** The estimator id (null: the platform's default). */
     public MeasureRequest withEstimator(String id) {
-        return new MeasureRequest(inputs, blank(id), templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, blank(id), templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** The template set id (null: the default set, for estimators that use templates). */
     public MeasureRequest withTemplates(String id) {
-        return new MeasureRequest(inputs, estimatorId, blank(id), profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, blank(id), profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** A forced instrument profile id (null: found by sniffing). */
     public MeasureRequest withProfile(String id) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, blank(id), frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, templatesId, blank(id), frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** The velocity frame for the corrected columns ({@code bary}, {@code helio}, {@code cmb}, {@code lg}; null: none). */
     public MeasureRequest withFrame(String f) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, blank(f), cosmologyId, output, threads, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, blank(f), cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** The named cosmology for the distance columns (null: the platform's default). */
     public MeasureRequest withCosmology(String id) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, blank(id), output, threads, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, blank(id), output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** The catalogue file (null: rows go only to the listener). */
     public MeasureRequest withOutput(Path file) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, file, threads, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, file, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** Worker threads (0: one per available core). */
@@ -91,12 +96,12 @@ public final class MeasureRequest {
         if (n < 0) {
             throw new IllegalArgumentException("threads must be 0 (all cores) or positive: " + n);
         }
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, n, resume, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, n, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** Resume the interrupted run whose journal sits beside the output file. */
     public MeasureRequest withResume(boolean r) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, r, timeLimit, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, r, timeLimit, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** The most one spectrum may take (reading excluded); beyond it the spectrum fails and the run goes on. */
@@ -105,7 +110,7 @@ public final class MeasureRequest {
         if (d.isNegative() || d.isZero()) {
             throw new IllegalArgumentException("time limit must be positive: " + d);
         }
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, d, zMin, zMax);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, d, zMin, zMax, sliceFirst, sliceCount);
     }
 
     /** The redshift range searched; solutions outside it count as nonsense from the estimator. */
@@ -113,7 +118,24 @@ public final class MeasureRequest {
         if (!(min < max)) {
             throw new IllegalArgumentException("redshift range: minimum " + min + " is not below maximum " + max);
         }
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, min, max);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, min, max, sliceFirst, sliceCount);
+    }
+
+    /**
+     * Only a slice of the inputs' spectra: the {@code count} spectra from position {@code first}
+     * (0-based, counting every record of the inputs in order, failed reads included) are measured;
+     * the ones before are read and passed over, reading stops after the slice. The rows keep their
+     * position in the inputs as their sequence number. For engines that split a survey into
+     * bounded tasks (each task one slice of one file). Not with {@link #withResume(boolean) resume}.
+     *
+     * @param count spectra in the slice, at least 1; -1 for all from {@code first} on
+     */
+    public MeasureRequest withSlice(long first, long count) {
+        if (first < 0 || count == 0 || count < -1) {
+            throw new IllegalArgumentException("slice: first " + first + " must be >= 0 and count " + count + " >= 1 (or -1: to the end)");
+        }
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit,
+                zMin, zMax, first, count);
     }
 
     public List<Path> inputs() { return inputs; }
@@ -129,6 +151,10 @@ public final class MeasureRequest {
     public Duration timeLimit() { return timeLimit; }
     public double zMin() { return zMin; }
     public double zMax() { return zMax; }
+    /** Position of the first spectrum measured (0 unless {@link #withSlice} was used). */
+    public long sliceFirst() { return sliceFirst; }
+    /** Spectra measured from {@link #sliceFirst()}; -1 for all to the end. */
+    public long sliceCount() { return sliceCount; }
 
     private static String blank(String s) {
         return s == null || s.isBlank() ? null : s.trim();

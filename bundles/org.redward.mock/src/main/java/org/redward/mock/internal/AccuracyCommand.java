@@ -21,6 +21,7 @@ import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.redshift.RedshiftEstimator;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.TemplateRegistry;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -71,7 +72,7 @@ public final class AccuracyCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        if (!Cli.parse(a, arguments, "accuracy", ctx.out())) {
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         if (a.size < MIN_SIZE || a.size > SurveyGenerator.MAX_SIZE) {

@@ -24,6 +24,7 @@ import org.redward.api.commands.UsageException;
 import org.redward.api.formats.ReaderRegistry;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.templates.TemplateRegistry;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -88,15 +89,15 @@ public final class DemoCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        if (!Cli.parse(a, arguments, "demo", ctx.out())) {
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         if (a.size < 1) {
             throw new UsageException("--size " + a.size + ": the survey needs at least 1 fibre");
         }
-        if (a.size > MAX_DEMO_SIZE) {
+        if (a.size > MAX_DEMO_SIZE && !a.generateOnly) {
             throw new UsageException("--size " + a.size + " is more than the demo's limit of " + MAX_DEMO_SIZE
-                    + " fibres; for large mock surveys use 'redward accuracy --size N'");
+                    + " fibres; for large mock surveys use 'redward accuracy --size N' (or --generate-only, which has no limit)");
         }
         if (a.threads < 1) {
             throw new UsageException("--threads " + a.threads + ": at least 1");

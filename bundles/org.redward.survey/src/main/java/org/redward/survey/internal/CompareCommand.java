@@ -26,6 +26,7 @@ import org.redward.api.commands.UsageException;
 import org.redward.api.survey.MeasureRequest;
 import org.redward.api.survey.MeasureSummary;
 import org.redward.api.survey.MeasuredRow;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -61,7 +62,7 @@ public final class CompareCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        if (!RunOptions.parse(a, arguments, ctx)) {
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         List<String> ids = a.estimators.stream().map(String::trim).filter(s -> !s.isEmpty()).distinct().toList();

@@ -16,6 +16,7 @@ import org.redward.api.survey.MeasureListener;
 import org.redward.api.survey.MeasureRequest;
 import org.redward.api.survey.MeasureSummary;
 import org.redward.api.survey.MeasuredRow;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -59,6 +60,9 @@ public final class MeasureCommand implements Command {
         String engine = "local";
         @Option(names = "--master", paramLabel = "URL", description = "with --engine spark: the Spark master (default: local[*])")
         String master;
+        @Option(names = "--spectra-per-task", paramLabel = "K", description = "with --engine spark: the most spectra one Spark task"
+                + " measures (files are cut into slices of at most K; default 200)")
+        Integer spectraPerTask;
         @Option(names = "--json", description = "one JSON object per line per spectrum on standard output")
         boolean json;
     }
@@ -66,7 +70,7 @@ public final class MeasureCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        if (!RunOptions.parse(a, arguments, ctx)) {
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         if (a.frame != null && !FRAMES.contains(a.frame.toLowerCase(Locale.ROOT))) {
@@ -85,27 +89,44 @@ public final class MeasureCommand implements Command {
         MeasureListener listener = a.json ? row -> out.println(RowCodec.toJson(row))
                 : a.out == null ? new TextRows(out) : MeasureListener.none();
         MeasureSummary s;
-        try (Progress progress = ctx.progress("measure", -1)) {
-            s = survey.measure(req, listener, progress::advance);
+        String heap;
+        try (HeapWatch watch = new HeapWatch(); Progress progress = ctx.progress("measure", -1)) {
+            // the total (for the rate and time left) comes from the readers' counts, on the side: it never delays the run
+            Thread counter = new Thread(() -> {
+                long total = survey.expectedSpectra(req);
+                if (total > 0) {
+                    progress.total(total);
+                }
+            }, "redward-measure-count");
+            counter.setDaemon(true);
+            counter.start();
+            MeasureListener rows = listener;
+            s = survey.measure(req, new MeasureListener() {
+                @Override
+                public void started(long resumedRows) {
+                    progress.advance(resumedRows); // the interrupted run's rows count as done
+                    rows.started(resumedRows);
+                }
+
+                @Override
+                public void row(MeasuredRow row) {
+                    rows.row(row);
+                }
+            }, progress::advance);
+            heap = watch.describe();
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
-        report(ctx.err(), s);
+        report(ctx.err(), s, heap);
         return s.total() > 0 && s.ok() == 0 ? 1 : 0;
     }
 
-    static void report(PrintStream err, MeasureSummary s) {
+    static void report(PrintStream err, MeasureSummary s, String heap) {
         err.printf(Locale.ROOT, "measured %d spectra: %d ok, %d failed%s in %.1f s (%.1f spectra/s)%n", s.total(), s.ok(),
                 s.failed(), s.resumed() > 0 ? " (" + s.resumed() + " done by the interrupted run)" : "", s.seconds(),
                 s.spectraPerSecond());
         s.catalog().ifPresent(c -> err.println("catalogue: " + c));
-        long peak = 0;
-        for (java.lang.management.MemoryPoolMXBean p : java.lang.management.ManagementFactory.getMemoryPoolMXBeans()) {
-            if (p.getType() == java.lang.management.MemoryType.HEAP) {
-                peak += p.getPeakUsage().getUsed();
-            }
-        }
-        err.printf(Locale.ROOT, "peak heap: at most %.0f MiB%n", peak / 1048576.0);
+        err.println(heap);
         for (Map.Entry<String, String> e : s.misbehaving().entrySet()) {
             err.println("misbehaving plug-in: " + e.getKey() + ": " + e.getValue());
         }
@@ -114,6 +135,9 @@ public final class MeasureCommand implements Command {
     /** {@code --engine spark}: the same bundles measure the inputs inside Apache Spark; the catalogue is Parquet in --out. */
     private int onSpark(CommandContext ctx, Args a) throws Exception {
         a.run.request(ctx); // the same checks of the shared options
+        if (a.spectraPerTask != null && a.spectraPerTask < 1) {
+            throw new UsageException("--spectra-per-task " + a.spectraPerTask + ": expected a whole number >= 1");
+        }
         if (a.resume || a.json) {
             throw new UsageException("--engine spark: " + (a.resume ? "--resume" : "--json")
                     + " is for local runs (Spark retries failed tasks itself; a rerun completes a killed job)");
@@ -124,7 +148,8 @@ public final class MeasureCommand implements Command {
             job.add(a.master);
         }
         String[][] pass = {{"--estimator", a.estimator}, {"--templates", a.run.templates}, {"--profile", a.run.profile},
-                {"--frame", a.frame}, {"--cosmology", a.cosmology}, {"--time-limit-s", Double.toString(a.run.timeLimitSeconds)}};
+                {"--frame", a.frame}, {"--cosmology", a.cosmology}, {"--time-limit-s", Double.toString(a.run.timeLimitSeconds)},
+                {"--spectra-per-task", a.spectraPerTask == null ? null : a.spectraPerTask.toString()}};
         for (String[] o : pass) {
             if (o[1] != null) {
                 job.add(o[0]);

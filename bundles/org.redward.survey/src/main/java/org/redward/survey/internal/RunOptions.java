@@ -51,24 +51,4 @@ final class RunOptions {
         return MeasureRequest.of(resolved).withTemplates(templates).withProfile(profile).withThreads(threads)
                 .withTimeLimit(Duration.ofMillis(Math.round(timeLimitSeconds * 1000))).withRedshiftRange(zMin, zMax);
     }
-
-    /**
-     * Parses a command's arguments into {@code args}; prints the usage for --help.
-     *
-     * @return false when the usage was printed (the command is done)
-     * @throws UsageException for bad options
-     */
-    static boolean parse(Object args, List<String> arguments, CommandContext ctx) {
-        CommandLine cl = new CommandLine(args);
-        try {
-            cl.parseArgs(arguments.toArray(new String[0]));
-        } catch (CommandLine.ParameterException e) {
-            throw new UsageException(e.getMessage());
-        }
-        if (cl.isUsageHelpRequested() || cl.isVersionHelpRequested()) {
-            cl.usage(ctx.out());
-            return false;
-        }
-        return true;
-    }
 }

@@ -100,6 +100,15 @@ final class SparkEngine {
         cmd.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
         cmd.addAll(JVM_OPTIONS);
         cmd.add("-Dredward.home=" + ctx.productHome());
+        int m = jobArguments.indexOf("--master");
+        boolean localCluster = m >= 0 && m + 1 < jobArguments.size() && jobArguments.get(m + 1).startsWith("local-cluster");
+        Path sparkHome = null;
+        if (localCluster) {
+            // local-cluster starts executor JVMs through a worker, which builds their class path from
+            // SPARK_HOME/jars (plus the executors' extra class path: the job and API jars)
+            sparkHome = localClusterHome(spark, outFolder);
+            cmd.add("-Dspark.executor.extraClassPath=" + job.resolve("*"));
+        }
         cmd.add("-cp");
         cmd.add(job.resolve("*") + java.io.File.pathSeparator + spark.resolve("*"));
         cmd.add(MAIN);
@@ -110,9 +119,33 @@ final class SparkEngine {
         cmd.addAll(jobArguments);
         ctx.err().println("redward measure: running on Spark (" + String.join(" ", jobArguments.subList(0, Math.min(2, jobArguments.size())))
                 + "...); the catalogue goes to " + outFolder.resolve("catalog.parquet"));
-        Process p = new ProcessBuilder(cmd).redirectOutput(ProcessBuilder.Redirect.INHERIT)
-                .redirectError(ProcessBuilder.Redirect.INHERIT).start();
-        return p.waitFor();
+        ProcessBuilder pb = new ProcessBuilder(cmd).redirectOutput(ProcessBuilder.Redirect.INHERIT)
+                .redirectError(ProcessBuilder.Redirect.INHERIT);
+        if (sparkHome != null) {
+            pb.environment().put("SPARK_HOME", sparkHome.toString());
+            // Spark's command builder asks for the Scala version of a home that is not a source build
+            pb.environment().putIfAbsent("SPARK_SCALA_VERSION", SCALA_VERSION);
+        }
+        return pb.start().waitFor();
+    }
+
+    /** The Scala version of the Spark that the survey feature ships (Spark 4: Scala 2.13). */
+    static final String SCALA_VERSION = "2.13";
+
+    /**
+     * A Spark home for {@code local-cluster} masters: SPARK_HOME when it has a {@code jars/}
+     * folder, else {@code <out>/spark-home} whose {@code jars} links to the survey feature's Spark.
+     */
+    static Path localClusterHome(Path sparkJars, Path outFolder) throws IOException {
+        if (sparkJars.getFileName() != null && sparkJars.getFileName().toString().equals("jars")) {
+            return sparkJars.getParent();
+        }
+        Path home = Files.createDirectories(outFolder.resolve("spark-home"));
+        Path jars = home.resolve("jars");
+        if (!Files.exists(jars)) {
+            Files.createSymbolicLink(jars, sparkJars.toAbsolutePath());
+        }
+        return home;
     }
 
     /**

@@ -8,6 +8,7 @@ import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.redward.api.commands.Command;
 import org.redward.api.commands.CommandContext;
+import org.redward.cli.options.CommandOptions;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Option;
@@ -38,10 +39,7 @@ public final class SurveyPackageCommand implements Command {
     @Override
     public int run(CommandContext ctx, List<String> arguments) throws Exception {
         Args a = new Args();
-        CommandLine cl = new CommandLine(a);
-        cl.parseArgs(arguments.toArray(new String[0]));
-        if (cl.isUsageHelpRequested()) {
-            cl.usage(ctx.out());
+        if (!CommandOptions.parse(a, arguments, ctx.out())) {
             return 0;
         }
         Path out = ctx.workingDirectory().resolve(a.out);

@@ -62,6 +62,10 @@ final class SurveyRun {
     }
 
     MeasureSummary run(MeasureListener listener) throws IOException, InterruptedException {
+        boolean sliced = request.sliceFirst() > 0 || request.sliceCount() >= 0;
+        if (sliced && request.resume()) {
+            throw new IllegalArgumentException("--resume: a run of a slice of the inputs cannot be resumed; run the slice again");
+        }
         List<Path> files = feeds.expand(request.inputs());
         String fingerprint = fingerprint(files);
         Optional<Path> out = request.output().map(Path::toAbsolutePath);
@@ -93,8 +97,10 @@ final class SurveyRun {
         long[] counts = new long[2];
         long t0 = System.nanoTime();
         final Journal j = journal;
-        try (Feed feed = feeds.open(request.inputs())) {
-            pipeline.run(feed, state.rows(), row -> {
+        try (Feed feed = sliced ? limit(feeds.open(request.inputs()),
+                request.sliceCount() < 0 ? -1 : request.sliceFirst() + request.sliceCount())
+                : feeds.open(request.inputs())) {
+            pipeline.run(feed, state.rows() + request.sliceFirst(), row -> {
                 if (j != null) {
                     try {
                         j.write(row);
@@ -125,6 +131,30 @@ final class SurveyRun {
             Files.delete(journal.file());
         }
         return new MeasureSummary(state.rows() + newRows, ok, failed, state.rows(), seconds, out, pipeline.misbehaving());
+    }
+
+    /** The feed cut after {@code end} records ({@code end} below 0: not cut); reading stops there. */
+    static Feed limit(Feed feed, long end) {
+        if (end < 0) {
+            return feed;
+        }
+        return new Feed() {
+            private long given;
+
+            @Override
+            public org.redward.api.formats.SpectrumRecord next() throws IOException {
+                if (given >= end) {
+                    return null;
+                }
+                given++;
+                return feed.next();
+            }
+
+            @Override
+            public void close() {
+                feed.close();
+            }
+        };
     }
 
     private static long[] countJournal(Path jf) {

@@ -149,6 +149,37 @@ public final class SurveyService implements SurveyMeasurer {
         }
     }
 
+    /**
+     * Spectra the request's inputs hold, as their readers know it up front (through the reading
+     * facade's {@link SpectrumInputs#counts}, without reading the spectra); a file whose count is
+     * unknown is estimated at the mean of the known ones (1 when none is known). For progress
+     * totals: an estimate when some counts are unknown. Never throws for bad input.
+     */
+    long expectedSpectra(MeasureRequest request) {
+        ReadOptions read = ReadOptions.defaults();
+        if (request.profileId().isPresent()) {
+            read = read.withProfile(request.profileId().get());
+        }
+        long known = 0;
+        int knownFiles = 0;
+        int unknownFiles = 0;
+        for (long c : inputs.counts(request.inputs(), read)) {
+            if (c >= 0) {
+                known += c;
+                knownFiles++;
+            } else {
+                unknownFiles++;
+            }
+        }
+        long perUnknown = knownFiles == 0 ? 1 : Math.max(1, Math.round((double) known / knownFiles));
+        long total = known + unknownFiles * perUnknown;
+        if (request.sliceFirst() > 0 || request.sliceCount() >= 0) {
+            total = Math.max(0, total - request.sliceFirst());
+            total = request.sliceCount() >= 0 ? Math.min(total, request.sliceCount()) : total;
+        }
+        return total;
+    }
+
     @Override
     public org.redward.api.catalog.CatalogTable table(MeasureRequest request, Iterable<MeasuredRow> rows, long rowCount) {
         CatalogLayout layout = new CatalogLayout(enricher(request, new LinkedHashMap<>()).columns());

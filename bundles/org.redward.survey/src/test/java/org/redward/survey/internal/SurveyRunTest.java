@@ -74,6 +74,31 @@ class SurveyRunTest {
     }
 
     @Test
+    void aSliceGivesExactlyItsPartOfTheWholeRun() throws Exception {
+        List<MeasuredRow> whole = new ArrayList<>();
+        run(new Synthetic.SpikeEstimation(), 2, 100, MeasureRequest.of(List.of()).withThreads(2), whole);
+        List<MeasuredRow> slice = new ArrayList<>();
+        MeasureSummary s = run(new Synthetic.SpikeEstimation(), 2, 100, MeasureRequest.of(List.of()).withThreads(2).withSlice(70, 45), slice);
+        assertEquals(45, s.total());
+        assertEquals(45, slice.size());
+        for (int i = 0; i < slice.size(); i++) {
+            MeasuredRow a = whole.get(70 + i);
+            MeasuredRow b = slice.get(i);
+            assertEquals(a.sequence(), b.sequence(), "rows keep their position in the inputs");
+            assertEquals(a.id(), b.id());
+            assertEquals(a.ok(), b.ok());
+            assertEquals(a.z(), b.z(), 0.0);
+        }
+        List<MeasuredRow> tail = new ArrayList<>();
+        run(new Synthetic.SpikeEstimation(), 2, 100, MeasureRequest.of(List.of()).withThreads(1).withSlice(190, -1), tail);
+        assertEquals(10, tail.size(), "a slice with no count runs to the end");
+        assertThrows(IllegalArgumentException.class, () -> MeasureRequest.of(List.of()).withSlice(0, 0));
+        assertThrows(IllegalArgumentException.class,
+                () -> run(new Synthetic.SpikeEstimation(), 1, 10, MeasureRequest.of(List.of()).withSlice(1, 2)
+                        .withOutput(dir.resolve("c.txt")).withResume(true), new ArrayList<>()));
+    }
+
+    @Test
     void throwingHangingAndNonsenseEstimatorsAreIsolated() throws Exception {
         Estimation bad = new Estimation() {
             final Synthetic.SpikeEstimation good = new Synthetic.SpikeEstimation();

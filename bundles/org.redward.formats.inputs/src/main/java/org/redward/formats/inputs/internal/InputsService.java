@@ -15,6 +15,7 @@ import org.redward.api.formats.ProfileRegistry;
 import org.redward.api.formats.ReadOptions;
 import org.redward.api.formats.ReaderRegistry;
 import org.redward.api.formats.SpectrumInputs;
+import org.redward.api.formats.SpectrumSource;
 
 /** The reading facade: see {@link SpectrumInputs}. Thread-safe. */
 @Component(service = SpectrumInputs.class)
@@ -56,6 +57,43 @@ public final class InputsService implements SpectrumInputs {
     @Override
     public Stream open(List<Path> inputs, ReadOptions options) {
         return new Batch(Expansion.expand(inputs), options, readers::providers, profiles::providers, executor);
+    }
+
+    @Override
+    public long[] counts(List<Path> inputs, ReadOptions options) {
+        List<Expansion.Item> items = Expansion.expand(inputs);
+        long[] out = new long[items.size()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = count(items.get(i), options);
+        }
+        return out;
+    }
+
+    /** The spectra of one file by its reader's count (the same choice of reader and profile as {@link Batch}). */
+    private long count(Expansion.Item item, ReadOptions options) {
+        if (item.problem() != null) {
+            return -1;
+        }
+        Path file = item.path();
+        try {
+            byte[] head = Chooser.head(file);
+            if (head.length == 0) {
+                return -1;
+            }
+            Chooser.Choice c = Chooser.choose(file, head, options, readers.providers(), profiles.providers());
+            if (!c.ok()) {
+                return item.fromFolder() ? 0 : -1;
+            }
+            if (item.fromFolder() && c.score() < Chooser.FOLDER_MIN_SCORE && options.readerId().isEmpty()
+                    && options.profileId().isEmpty()) {
+                return 0;
+            }
+            try (SpectrumSource src = c.reader().service().open(file, c.profile())) {
+                return src.count();
+            }
+        } catch (Exception | LinkageError e) {
+            return -1;
+        }
     }
 
     @Override

@@ -50,6 +50,28 @@ class InputsServiceTest {
         }
     }
 
+    /** Source: ../shared/realdata (public survey files; see its README): counts up front equal the records read. */
+    @Test
+    void countsUpFrontMatchWhatIsRead(@TempDir Path dir) throws Exception {
+        InputsService in = new InputsService(Registries.readers(Map.of("fits", new FitsReader())), Registries.surveyProfiles());
+        List<Path> paths = List.of(SharedData.realData());
+        long[] counts = in.counts(paths, ReadOptions.defaults());
+        List<Path> files = in.expand(paths);
+        assertEquals(files.size(), counts.length);
+        for (int i = 0; i < counts.length; i++) {
+            Path f = files.get(i);
+            long read = all(in, List.of(f), ReadOptions.defaults()).size();
+            String name = f.getFileName().toString();
+            long expected = name.endsWith(".fits") || name.endsWith(".fits.gz") ? read : 0; // README.md, truth.tsv: passed over
+            assertEquals(expected, counts[i], name);
+        }
+        Path notFits = dir.resolve("notes.fits");
+        Files.writeString(notFits, "this is not FITS\n");
+        long[] bad = in.counts(List.of(notFits, dir.resolve("missing.fits")), ReadOptions.defaults());
+        assertEquals(-1, bad[0], "a named file no reader knows: unknown");
+        assertEquals(-1, bad[1], "a missing file: unknown");
+    }
+
     @Test
     void badFilesAreReportedAndTheBatchGoesOn(@TempDir Path dir) throws Exception {
         Path notFits = dir.resolve("notes.fits");
