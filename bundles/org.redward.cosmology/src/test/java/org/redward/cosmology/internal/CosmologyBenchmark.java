@@ -23,6 +23,12 @@ public final class CosmologyBenchmark {
         main(new String[0]);
     }
 
+    /** Runs {@link #main} under {@code mvn -B verify -Pbenchmarks} (surefire runs only *Benchmark classes there). */
+    @org.junit.jupiter.api.Test
+    void benchmark() throws Exception {
+        main(new String[0]);
+    }
+
     public static void main(String[] args) {
         int n = 1_000_000;
         SplittableRandom rnd = new SplittableRandom(42);

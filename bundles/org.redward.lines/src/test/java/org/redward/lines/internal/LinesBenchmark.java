@@ -24,6 +24,12 @@ public final class LinesBenchmark {
         main(new String[0]);
     }
 
+    /** Runs {@link #main} under {@code mvn -B verify -Pbenchmarks} (surefire runs only *Benchmark classes there). */
+    @org.junit.jupiter.api.Test
+    void benchmark() throws Exception {
+        main(new String[0]);
+    }
+
     public static void main(String[] args) {
         double z = 0.08;
         double[][] lines = {

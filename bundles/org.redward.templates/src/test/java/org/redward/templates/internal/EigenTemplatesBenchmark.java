@@ -17,7 +17,13 @@ import org.redward.spectrum.Spectrum;
  */
 public final class EigenTemplatesBenchmark {
 
-    private EigenTemplatesBenchmark() {
+    EigenTemplatesBenchmark() {
+    }
+
+    /** Runs {@link #main} under {@code mvn -B verify -Pbenchmarks} (surefire runs only *Benchmark classes there). */
+    @org.junit.jupiter.api.Test
+    void benchmark() throws Exception {
+        main(new String[0]);
     }
 
     public static void main(String[] args) {

@@ -22,6 +22,12 @@ import org.redward.testkit.SyntheticSpectra;
  */
 public final class ChiSquareBenchmark {
 
+    /** Runs {@link #main} under {@code mvn -B verify -Pbenchmarks} (surefire runs only *Benchmark classes there). */
+    @org.junit.jupiter.api.Test
+    void benchmark() throws Exception {
+        main(new String[0]);
+    }
+
     public static void main(String[] args) {
         FftCorrelator.singleThreaded();
         List<GriddedTemplate> galaxies = new ArrayList<>();

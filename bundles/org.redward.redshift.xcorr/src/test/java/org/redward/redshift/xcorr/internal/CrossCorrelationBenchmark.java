@@ -29,6 +29,12 @@ import org.redward.testkit.SyntheticSpectra;
  */
 public final class CrossCorrelationBenchmark {
 
+    /** Runs {@link #main} under {@code mvn -B verify -Pbenchmarks} (surefire runs only *Benchmark classes there). */
+    @org.junit.jupiter.api.Test
+    void benchmark() throws Exception {
+        main(new String[0]);
+    }
+
     public static void main(String[] args) {
         FftCorrelator.singleThreaded();
         int n = 4000;
