@@ -144,6 +144,10 @@ public final class SurveyJob {
             return;
         }
         SparkSession.Builder b = SparkSession.builder().appName("redward-measure");
+        if (System.getProperty("spark.ui.showConsoleProgress") == null) {
+            // tasks done / all, on standard error (Spark draws it when its own INFO messages are off)
+            b = b.config("spark.ui.showConsoleProgress", "true");
+        }
         if (args.master != null) {
             b = b.master(args.master);
         } else if (System.getProperty("spark.master") == null) {
