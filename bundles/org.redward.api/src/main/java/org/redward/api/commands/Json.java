@@ -61,7 +61,9 @@ public final class Json {
             if (!Double.isFinite(d)) {
                 sb.append("null");
             } else if (d == Math.rint(d) && Math.abs(d) < 1e15) {
-                sb.append(String.format(Locale.ROOT, "%.1f", d));
+                // a whole number keeps one decimal (3.0, -0.0) so that it reads back as a double;
+                // written directly: this runs for every number of every journalled row
+                sb.append(d == 0 && 1 / d < 0 ? "-0" : Long.toString((long) d)).append(".0");
             } else {
                 sb.append(Double.toString(d));
             }

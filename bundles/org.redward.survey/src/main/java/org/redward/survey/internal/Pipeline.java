@@ -26,7 +26,8 @@ import org.redward.spectrum.SpectrumMetadata;
  * The engine of a run, free of OSGi: one reader thread streams spectra from a {@link Feed},
  * worker threads measure them through an {@link Estimation}, and the calling thread collects the
  * rows in input order and hands them to a sink (the journal). Memory is bounded by the window of
- * spectra in flight (four per worker), not by the number of spectra.
+ * spectra in flight (sixteen per worker and sixteen more, so that one slow spectrum does not leave
+ * the other workers idle), not by the number of spectra.
  *
  * <p>Isolation: an estimation that throws gives a failed row (fault {@code threw}); one that
  * returns a non-finite z or error or a z outside the searched range gives a failed row (fault
@@ -89,7 +90,7 @@ final class Pipeline {
      * @return the number of rows collected
      */
     long run(Feed feed, long skip, Consumer<MeasuredRow> sink) throws IOException, InterruptedException {
-        int window = 4 * threads + 4;
+        int window = 16 * threads + 16;
         BlockingQueue<Task> ordered = new ArrayBlockingQueue<>(window);
         AtomicReference<Throwable> readFailure = new AtomicReference<>();
         Thread reader = new Thread(() -> readLoop(feed, skip, ordered, readFailure), "redward-measure-reader");

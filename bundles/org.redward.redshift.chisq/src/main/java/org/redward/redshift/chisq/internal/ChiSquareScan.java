@@ -23,7 +23,7 @@ import org.redward.redshift.kit.GriddedSpectrum;
  * the direct solution at each of n_z trial redshifts. A trial shift where fewer than
  * {@code minCoverage} of the usable pixels fall on the templates' data is skipped (NaN).
  *
- * <p>Stateless and thread-safe.
+ * <p>Thread-safe: the only state is each thread's own reused work arrays.
  */
 final class ChiSquareScan {
 
@@ -35,7 +35,9 @@ final class ChiSquareScan {
         final int n;
         final double xwx;
         final double[] wxHat;
-        /** wpHat[a] = FFT(w P_a); wpHat[0] = FFT(w). */
+        /** FFT(w): the weights alone (P_0 = 1, so wpHat[0] when there are polynomial terms). */
+        final double[] wHat;
+        /** wpHat[a] = FFT(w P_a). */
         final double[][] wpHat;
         final double[] usableHat;
         final double[] bPoly;
@@ -75,6 +77,7 @@ final class ChiSquareScan {
                 }
                 wpHat[a] = FftCorrelator.forward(wp, n);
             }
+            this.wHat = polyTerms > 0 ? wpHat[0] : FftCorrelator.forward(s.weight, n);
             this.usable = s.usablePixels;
         }
     }
@@ -119,37 +122,54 @@ final class ChiSquareScan {
             return new Curve(shiftLo, new double[0], d);
         }
         int n = side.n;
-        double[][] bT = new double[m][];
-        double[][][] mTT = new double[m][m][];
-        double[][][] mTP = new double[m][p][];
+        // Every K-dependent sum, one correlation each: b_j (m), M_jl for l <= j (m(m+1)/2), M_ja
+        // (m p) and the coverage (1). Each is computed into one reused work array and only the
+        // scanned shifts are kept, packed per shift (row q holds the sums of shift q side by side),
+        // so that the solve below reads one short contiguous row per shift and nothing of length n
+        // is allocated per scan.
+        int sums = m + m * (m + 1) / 2 + m * p + 1;
+        Scratch w = SCRATCH.get().fit(n, count * sums, d);
+        double[] work = w.work;
+        double[] packed = w.packed;
+        int[] index = w.index(count);
+        for (int q = 0; q < count; q++) {
+            index[q] = (int) Math.floorMod(shiftLo + q - offset, (long) n);
+        }
+        int col = 0;
         for (int a = 0; a < m; a++) {
-            bT[a] = FftCorrelator.correlate(side.wxHat, prep.t()[a]);
+            keep(FftCorrelator.correlate(side.wxHat, prep.t()[a], 1.0, work), index, count, packed, sums, col++);
+        }
+        for (int a = 0; a < m; a++) {
             for (int b = 0; b <= a; b++) {
-                mTT[a][b] = FftCorrelator.correlate(side.wpHat[0], prep.tt()[a][b]);
-                mTT[b][a] = mTT[a][b];
-            }
-            for (int c = 0; c < p; c++) {
-                mTP[a][c] = FftCorrelator.correlate(side.wpHat[c], prep.t()[a]);
+                keep(FftCorrelator.correlate(side.wHat, prep.tt()[a][b], 1.0, work), index, count, packed, sums, col++);
             }
         }
-        double[] cov = FftCorrelator.correlate(side.usableHat, prep.coverage());
+        for (int a = 0; a < m; a++) {
+            for (int c = 0; c < p; c++) {
+                keep(FftCorrelator.correlate(side.wpHat[c], prep.t()[a], 1.0, work), index, count, packed, sums, col++);
+            }
+        }
+        keep(FftCorrelator.correlate(side.usableHat, prep.coverage(), 1.0, work), index, count, packed, sums, col);
+        int ttAt = m, tpAt = m + m * (m + 1) / 2, covAt = sums - 1;
         double need = minCoverage * side.usable;
-        double[] mat = new double[d * d];
-        double[] rhs = new double[d];
+        double[] mat = w.mat;
+        double[] rhs = w.rhs;
         for (int q = 0; q < count; q++) {
-            long k = shiftLo + q - offset;
-            int idx = (int) Math.floorMod(k, (long) n);
-            if (cov[idx] < need - 0.5) {
+            int row = q * sums;
+            if (packed[row + covAt] < need - 0.5) {
                 continue;
             }
             for (int a = 0; a < m; a++) {
-                rhs[a] = bT[a][idx];
-                for (int b = 0; b < m; b++) {
-                    mat[a * d + b] = mTT[a][b][idx];
+                rhs[a] = packed[row + a];
+                int tt = row + ttAt + a * (a + 1) / 2;
+                for (int b = 0; b <= a; b++) {
+                    mat[a * d + b] = packed[tt + b];
+                    mat[b * d + a] = packed[tt + b];
                 }
+                int tp = row + tpAt + a * p;
                 for (int c = 0; c < p; c++) {
-                    mat[a * d + m + c] = mTP[a][c][idx];
-                    mat[(m + c) * d + a] = mTP[a][c][idx];
+                    mat[a * d + m + c] = packed[tp + c];
+                    mat[(m + c) * d + a] = packed[tp + c];
                 }
             }
             for (int c = 0; c < p; c++) {
@@ -158,12 +178,55 @@ final class ChiSquareScan {
                     mat[(m + c) * d + m + e] = side.mPoly[c][e];
                 }
             }
-            double explained = SmallCholesky.quadraticForm(mat, rhs, d);
+            double explained = SmallCholesky.quadraticForm(mat, rhs, d, w.saved, w.y);
             if (Double.isFinite(explained)) {
                 chi2[q] = side.xwx - explained;
             }
         }
         return new Curve(shiftLo, chi2, d);
+    }
+
+    /** Copies the scanned shifts of one correlation into column {@code col} of the packed rows. */
+    private static void keep(double[] correlation, int[] index, int count, double[] packed, int sums, int col) {
+        for (int q = 0, at = col; q < count; q++, at += sums) {
+            packed[at] = correlation[index[q]];
+        }
+    }
+
+    /** Per-thread work arrays of {@link #scan}, grown on demand and reused from scan to scan. */
+    private static final ThreadLocal<Scratch> SCRATCH = ThreadLocal.withInitial(Scratch::new);
+
+    private static final class Scratch {
+        double[] work = new double[0];
+        double[] packed = new double[0];
+        int[] index = new int[0];
+        double[] mat = new double[0];
+        double[] saved = new double[0];
+        double[] rhs = new double[0];
+        double[] y = new double[0];
+
+        Scratch fit(int n, int packedLength, int d) {
+            if (work.length != n) {
+                work = new double[n];
+            }
+            if (packed.length < packedLength) {
+                packed = new double[packedLength];
+            }
+            if (mat.length != d * d) {
+                mat = new double[d * d];
+                saved = new double[d * d];
+                rhs = new double[d];
+                y = new double[d];
+            }
+            return this;
+        }
+
+        int[] index(int count) {
+            if (index.length < count) {
+                index = new int[count];
+            }
+            return index;
+        }
     }
 
     /**

@@ -14,8 +14,15 @@ final class SmallCholesky {
 
     /** b^T A^-1 b, or NaN. {@code a} is overwritten. */
     static double quadraticForm(double[] a, double[] b, int d) {
-        double[] y = solveLower(a, b, d);
-        if (y == null) {
+        return quadraticForm(a, b, d, new double[d * d], new double[d]);
+    }
+
+    /**
+     * b^T A^-1 b, or NaN, without allocating: {@code saved} (length d d) and {@code y} (length d)
+     * are work arrays. {@code a} is overwritten.
+     */
+    static double quadraticForm(double[] a, double[] b, int d, double[] saved, double[] y) {
+        if (!solveLower(a, b, d, saved, y)) {
             return Double.NaN;
         }
         double s = 0;
@@ -27,8 +34,8 @@ final class SmallCholesky {
 
     /** A^-1 b, or null. {@code a} is overwritten. */
     static double[] solve(double[] a, double[] b, int d) {
-        double[] y = solveLower(a, b, d);
-        if (y == null) {
+        double[] y = new double[d];
+        if (!solveLower(a, b, d, new double[d * d], y)) {
             return null;
         }
         double[] x = new double[d];
@@ -42,31 +49,29 @@ final class SmallCholesky {
         return x;
     }
 
-    /** Factorises A = L L^T in place (lower triangle) and returns L^-1 b; null if not positive definite. */
-    private static double[] solveLower(double[] a, double[] b, int d) {
-        double[] saved = null;
+    /**
+     * Factorises A = L L^T in place (lower triangle) and writes L^-1 b into {@code y}; false if not
+     * positive definite. {@code saved} keeps A for the one retry with a ridge.
+     */
+    private static boolean solveLower(double[] a, double[] b, int d, double[] saved, double[] y) {
+        int len = d * d;
+        System.arraycopy(a, 0, saved, 0, len);
         for (int attempt = 0; attempt < 2; attempt++) {
             if (attempt == 1) {
-                if (saved == null) {
-                    return null;
-                }
-                System.arraycopy(saved, 0, a, 0, a.length);
+                System.arraycopy(saved, 0, a, 0, len);
                 double tr = 0;
                 for (int i = 0; i < d; i++) {
                     tr += a[i * d + i];
                 }
                 double ridge = 1e-10 * tr / d;
                 if (!(ridge > 0)) {
-                    return null;
+                    return false;
                 }
                 for (int i = 0; i < d; i++) {
                     a[i * d + i] += ridge;
                 }
-            } else {
-                saved = a.clone();
             }
             if (factor(a, d)) {
-                double[] y = new double[d];
                 for (int i = 0; i < d; i++) {
                     double s = b[i];
                     for (int k = 0; k < i; k++) {
@@ -74,10 +79,10 @@ final class SmallCholesky {
                     }
                     y[i] = s / a[i * d + i];
                 }
-                return y;
+                return true;
             }
         }
-        return null;
+        return false;
     }
 
     private static boolean factor(double[] a, int d) {
