@@ -102,7 +102,7 @@ public final class Main {
         }
         folders.addAll(options.dropInFolders);
 
-        Path storage = Files.createTempDirectory(storageParent(), "redward-felix-");
+        Path storage = createStorage();
         Map<String, String> fw = new HashMap<>();
         fw.put(Constants.FRAMEWORK_STORAGE, storage.toString());
         fw.put(Constants.FRAMEWORK_STORAGE_CLEAN, Constants.FRAMEWORK_STORAGE_CLEAN_ONFIRSTINIT);
@@ -315,12 +315,44 @@ public final class Main {
         for (String candidate : new String[] {runtime, "/dev/shm"}) {
             if (candidate != null && !candidate.isBlank()) {
                 Path p = Paths.get(candidate);
-                if (Files.isDirectory(p) && Files.isWritable(p)) {
+                if (Files.isDirectory(p) && Files.isWritable(p) && roomy(p)) {
                     return p;
                 }
             }
         }
+        return temporaryFolder();
+    }
+
+    /**
+     * Free space a memory-backed folder must have to be used: a run's storage is a few MiB (5 MiB
+     * for {@code measure}, more with the desktop bundles), and a container's {@code /dev/shm} is
+     * often only 64 MiB and shared with other programs.
+     */
+    static final long STORAGE_ROOM_BYTES = 64L << 20;
+
+    private static boolean roomy(Path p) {
+        try {
+            return Files.getFileStore(p).getUsableSpace() >= STORAGE_ROOM_BYTES;
+        } catch (IOException | RuntimeException e) {
+            return false;
+        }
+    }
+
+    private static Path temporaryFolder() {
         return Paths.get(System.getProperty("java.io.tmpdir"));
+    }
+
+    /** This run's storage folder under {@link #storageParent()}; in the temporary folder if that one refuses it. */
+    static Path createStorage() throws IOException {
+        Path parent = storageParent();
+        try {
+            return Files.createTempDirectory(parent, "redward-felix-");
+        } catch (IOException e) {
+            if (parent.equals(temporaryFolder()) || System.getProperty("redward.storage.dir") != null) {
+                throw new IOException("cannot create the framework storage folder in " + parent + ": " + e.getMessage(), e);
+            }
+            return Files.createTempDirectory(temporaryFolder(), "redward-felix-");
+        }
     }
 
     /** Deletes a folder tree (plain recursion: no streams or lambdas, which cost time to set up at exit). */

@@ -21,8 +21,8 @@ import org.junit.jupiter.api.Test;
  * with the default estimator:
  *
  * <ol>
- * <li>the speed-up of {@code measure} from 1 to 2 threads on the survey's first S spectra (a
- * subset, so that the 1-thread run fits; said in the output), from the command's own figures and
+ * <li>the speed-up of {@code measure} from 1 to 2 threads on the survey's first S spectra (by
+ * default all of them; a subset is said in the output), from the command's own figures and
  * after warm-up: between the moments the journal held 20% and 90% of the spectra. A run's first
  * seconds carry one-time costs (start-up, JIT compilation, the first preparation of the
  * templates), and a JVM's compiler threads run on the core a 1-thread run leaves free, so the
@@ -49,8 +49,8 @@ import org.junit.jupiter.api.Test;
  * smaller sizes are list files of its first files. Each step's output is in
  * {@code <dir>/runs/<step>/} as it comes. Settings (system properties): {@code redward.bench.size}
  * (N, default 100000), {@code redward.bench.sizes} (default {@code 10000,N}),
- * {@code redward.bench.subset} (S, default 10000; S = N measures the speed-up on the whole survey,
- * and its 2-thread run then serves as the size-N step too), {@code redward.bench.seed} (default 8),
+ * {@code redward.bench.subset} (S, default N: the speed-up of the whole survey; its 2-thread run
+ * then serves as the size-N step too), {@code redward.bench.seed} (default 8),
  * {@code redward.bench.xmx} (heap limit of every {@code measure}, default 1g),
  * {@code redward.bench.spark} (default true), {@code redward.product} (the product folder; the
  * survey feature must be installed for the Spark steps). Run alone with
@@ -81,7 +81,7 @@ class SurveyScaleBenchmark {
                 sizes.add(size);
             }
         }
-        int subset = Math.min(n, Integer.getInteger("redward.bench.subset", 10_000));
+        int subset = Math.min(n, Integer.getInteger("redward.bench.subset", n));
         long seed = Long.getLong("redward.bench.seed", 8);
         boolean spark = Boolean.parseBoolean(System.getProperty("redward.bench.spark", "true"));
         Path dir = Path.of(System.getProperty("redward.bench.dir", System.getProperty("java.io.tmpdir") + "/redward-bench"))
