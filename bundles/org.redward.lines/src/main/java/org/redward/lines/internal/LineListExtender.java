@@ -10,14 +10,13 @@ import java.util.List;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
-import org.osgi.framework.BundleEvent;
 import org.osgi.framework.ServiceRegistration;
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Deactivate;
-import org.osgi.util.tracker.BundleTracker;
 import org.redward.api.lines.LineList;
 import org.redward.api.registry.Provided;
+import org.redward.bundle.kit.HeaderExtender;
 
 /**
  * The line-list extender: watches bundles come and go, and for every active bundle whose manifest
@@ -33,37 +32,17 @@ public final class LineListExtender {
     /** Service property: the list's version. */
     static final String VERSION = "redward.linelist.version";
 
-    private BundleTracker<List<ServiceRegistration<LineList>>> tracker;
+    private HeaderExtender<List<ServiceRegistration<LineList>>> extender;
 
     @Activate
     void activate(BundleContext context) {
-        tracker = new BundleTracker<>(context, Bundle.ACTIVE | Bundle.STARTING, null) {
-            @Override
-            public List<ServiceRegistration<LineList>> addingBundle(Bundle bundle, BundleEvent event) {
-                String header = bundle.getHeaders("").get(LineList.MANIFEST_HEADER);
-                if (header == null || header.isBlank()) {
-                    return null;
-                }
-                return register(bundle, header);
-            }
-
-            @Override
-            public void removedBundle(Bundle bundle, BundleEvent event, List<ServiceRegistration<LineList>> regs) {
-                for (ServiceRegistration<LineList> r : regs) {
-                    try {
-                        r.unregister();
-                    } catch (IllegalStateException alreadyGone) {
-                        // the bundle stopped first: the framework has unregistered it already
-                    }
-                }
-            }
-        };
-        tracker.open();
+        extender = HeaderExtender.registering(context, LineList.MANIFEST_HEADER, LineListExtender::register);
+        extender.open();
     }
 
     @Deactivate
     void deactivate() {
-        tracker.close();
+        extender.close();
     }
 
     private static List<ServiceRegistration<LineList>> register(Bundle bundle, String header) {

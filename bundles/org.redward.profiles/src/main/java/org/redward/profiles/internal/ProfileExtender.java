@@ -13,14 +13,13 @@ import java.util.concurrent.ConcurrentHashMap;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
-import org.osgi.framework.BundleEvent;
 import org.osgi.framework.ServiceRegistration;
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Deactivate;
-import org.osgi.util.tracker.BundleTracker;
 import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.registry.Provided;
+import org.redward.bundle.kit.HeaderExtender;
 
 /**
  * The profile extender: watches bundles that carry the manifest header {@value #HEADER} and
@@ -38,38 +37,18 @@ public final class ProfileExtender {
     /** Service property: the reader a profile is meant for. */
     public static final String READER_PROPERTY = "redward.profile.reader";
 
-    private BundleTracker<List<ServiceRegistration<InstrumentProfile>>> tracker;
+    private HeaderExtender<List<ServiceRegistration<InstrumentProfile>>> extender;
     private final Map<String, String> problems = new ConcurrentHashMap<>();
 
     @Activate
     void activate(BundleContext context) {
-        tracker = new BundleTracker<>(context, Bundle.STARTING | Bundle.ACTIVE, null) {
-            @Override
-            public List<ServiceRegistration<InstrumentProfile>> addingBundle(Bundle bundle, BundleEvent event) {
-                String header = bundle.getHeaders("").get(HEADER);
-                if (header == null || header.isBlank()) {
-                    return null;
-                }
-                return register(bundle, header);
-            }
-
-            @Override
-            public void removedBundle(Bundle bundle, BundleEvent event, List<ServiceRegistration<InstrumentProfile>> regs) {
-                for (ServiceRegistration<InstrumentProfile> r : regs) {
-                    try {
-                        r.unregister();
-                    } catch (IllegalStateException alreadyGone) {
-                        // the bundle stopped first: its services are gone already
-                    }
-                }
-            }
-        };
-        tracker.open();
+        extender = HeaderExtender.registering(context, HEADER, this::register);
+        extender.open();
     }
 
     @Deactivate
     void deactivate() {
-        tracker.close();
+        extender.close();
     }
 
     private List<ServiceRegistration<InstrumentProfile>> register(Bundle bundle, String header) {

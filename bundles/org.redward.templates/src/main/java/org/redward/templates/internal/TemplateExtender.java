@@ -11,14 +11,13 @@ import java.util.concurrent.ConcurrentHashMap;
 
 import org.osgi.framework.Bundle;
 import org.osgi.framework.BundleContext;
-import org.osgi.framework.BundleEvent;
 import org.osgi.framework.ServiceRegistration;
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Deactivate;
-import org.osgi.util.tracker.BundleTracker;
 import org.redward.api.registry.Provided;
 import org.redward.api.templates.TemplateSet;
+import org.redward.bundle.kit.HeaderExtender;
 
 /**
  * The template extender: watches bundles that carry the {@value TemplateSet#BUNDLE_HEADER}
@@ -47,39 +46,34 @@ public final class TemplateExtender {
     }
 
     private final Map<Long, Tracked> byBundle = new ConcurrentHashMap<>();
-    private BundleTracker<Tracked> tracker;
+    private HeaderExtender<Tracked> extender;
 
     @Activate
     void activate(BundleContext context) {
-        tracker = new BundleTracker<>(context, Bundle.ACTIVE | Bundle.STARTING, null) {
+        extender = new HeaderExtender<>(context, TemplateSet.BUNDLE_HEADER, new HeaderExtender.Handler<>() {
             @Override
-            public Tracked addingBundle(Bundle bundle, BundleEvent event) {
-                if (bundle.getHeaders("").get(TemplateSet.BUNDLE_HEADER) == null) {
-                    return null;
-                }
-                Tracked t = extend(bundle);
+            public Tracked adding(Bundle bundle, String header) {
+                Tracked t = extend(bundle, header);
                 byBundle.put(bundle.getBundleId(), t);
                 return t;
             }
 
             @Override
-            public void removedBundle(Bundle bundle, BundleEvent event, Tracked t) {
-                byBundle.remove(bundle.getBundleId());
-                for (ServiceRegistration<TemplateSet> r : t.registrations()) {
-                    try {
-                        r.unregister();
-                    } catch (IllegalStateException e) {
-                        // already gone with its bundle
-                    }
-                }
+            public List<ServiceRegistration<TemplateSet>> registrations(Tracked t) {
+                return t.registrations();
             }
-        };
-        tracker.open();
+
+            @Override
+            public void removed(Bundle bundle, Tracked t) {
+                byBundle.remove(bundle.getBundleId());
+            }
+        });
+        extender.open();
     }
 
     @Deactivate
     void deactivate() {
-        tracker.close();
+        extender.close();
         byBundle.clear();
     }
 
@@ -97,12 +91,11 @@ public final class TemplateExtender {
         return out;
     }
 
-    private static Tracked extend(Bundle bundle) {
+    private static Tracked extend(Bundle bundle, String header) {
         String origin = "bundle " + bundle.getSymbolicName() + " " + bundle.getVersion();
         List<ServiceRegistration<TemplateSet>> regs = new ArrayList<>();
         List<Registered> sets = new ArrayList<>();
         List<Problem> problems = new ArrayList<>();
-        String header = bundle.getHeaders("").get(TemplateSet.BUNDLE_HEADER);
         BundleContext ctx = bundle.getBundleContext();
         for (String descriptor : descriptorPaths(header)) {
             try {
