@@ -92,7 +92,7 @@ public final class ScoreChart {
             for (int i = 0; i < zz.length; i++) {
                 s.add(zz[i], Double.isFinite(sc[i]) ? Double.valueOf(sc[i]) : null, false);
             }
-            NumberAxis y = new NumberAxis(c.label() + ": " + c.scoreName() + (c.lowerIsBetter() ? " (lower is better, axis flipped)" : ""));
+            NumberAxis y = new NumberAxis(c.label() + ": " + c.scoreName() + (c.lowerIsBetter() ? ", best up" : ""));
             y.setInverted(c.lowerIsBetter());
             y.setAutoRangeIncludesZero(false);
             plot.setRangeAxis(k, y);

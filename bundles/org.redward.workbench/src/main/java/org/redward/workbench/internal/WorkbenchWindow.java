@@ -21,9 +21,12 @@ import org.eclipse.swt.graphics.ImageData;
 import org.eclipse.swt.graphics.ImageLoader;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.layout.RowData;
+import org.eclipse.swt.layout.RowLayout;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.FileDialog;
@@ -173,8 +176,12 @@ final class WorkbenchWindow {
         Composite top = new Composite(shell, SWT.NONE);
         top.setBackground(palette.panel);
         top.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        GridLayout tl = new GridLayout(13, false);
+        // one row that wraps onto a second when the window is narrow (nothing is cut off)
+        RowLayout tl = new RowLayout(SWT.HORIZONTAL);
+        tl.wrap = true;
+        tl.center = true;
         tl.marginHeight = 3;
+        tl.spacing = 6;
         top.setLayout(tl);
         Button open = button(top, "Add spectra…", e -> chooseAndAdd());
         open.setToolTipText("add files or a catalogue to the queue");
@@ -192,7 +199,7 @@ final class WorkbenchWindow {
         gradeFilter.addListener(SWT.DefaultSelection, e -> applyFilter());
         label(top, "estimators differ by ≥");
         disagreementFilter = new Text(top, SWT.BORDER);
-        disagreementFilter.setLayoutData(new GridData(60, SWT.DEFAULT));
+        disagreementFilter.setLayoutData(new RowData(60, SWT.DEFAULT));
         disagreementFilter.setMessage("km/s");
         disagreementFilter.addListener(SWT.DefaultSelection, e -> applyFilter());
         label(top, "km/s");
@@ -207,7 +214,6 @@ final class WorkbenchWindow {
         skyToggle.setBackground(palette.panel);
         skyToggle.addListener(SWT.Selection, e -> showSky(skyToggle.getSelection()));
         counts = label(top, "");
-        counts.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
 
         SashForm body = new SashForm(shell, SWT.HORIZONTAL);
         body.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
@@ -475,7 +481,7 @@ final class WorkbenchWindow {
         }
         counts.setText(String.format(Locale.ROOT, "%d shown of %d · %d decided · journal %s", queue.view().size(),
                 queue.all().size(), queue.decidedCount(), journal.file().getFileName()));
-        counts.getParent().layout();
+        shell.layout(new Control[] {counts}); // the top bar may now need one row more or fewer
     }
 
     private void fillQueueRow(Event e) {
