@@ -232,15 +232,14 @@ final class Pipeline {
         while (true) {
             long started = t.startNanos;
             long waitNanos = started == 0 ? TimeUnit.MILLISECONDS.toNanos(100) : started + limitNanos - System.nanoTime();
-            if (started != 0 && waitNanos <= 0 && t.beforeLines != null) {
-                if (t.result.complete(linesTimedOut(t.beforeLines))) {
-                    abandon(t);
-                }
-            } else if (started != 0 && waitNanos <= 0) {
-                MeasuredRow timedOut = fault(base(t), MeasuredRow.FAULT_TIMED_OUT, String.format(Locale.ROOT,
-                        "estimator gave no answer within the time limit of %s s (bundle %s); abandoned",
-                        seconds(timeLimit), estimation.bundle())).build();
-                if (t.result.complete(timedOut)) {
+            // a task done in time but collected late (behind a slow one) is not timed out: counts only when this completes it
+            if (started != 0 && waitNanos <= 0 && !t.result.isDone() && t.beforeLines != null) {
+                linesTimedOut(t);
+            } else if (started != 0 && waitNanos <= 0 && !t.result.isDone()) {
+                String reason = String.format(Locale.ROOT, "estimator gave no answer within the time limit of %s s (bundle %s); abandoned",
+                        seconds(timeLimit), estimation.bundle());
+                if (t.result.complete(base(t).failed(reason).fault(MeasuredRow.FAULT_TIMED_OUT, estimation.bundle()).build())) {
+                    count(estimation.bundle(), MeasuredRow.FAULT_TIMED_OUT, reason);
                     abandon(t);
                     if (hungAlive.get() >= MAX_HUNG && disabledReason == null) {
                         disabledReason = "estimator disabled for the rest of the run after " + MAX_HUNG
@@ -268,16 +267,22 @@ final class Pipeline {
         startWorker();
     }
 
-    /** The estimator's row, kept ok, when the line step ran beyond the time limit; the line finder's bundle is named. */
-    private MeasuredRow linesTimedOut(MeasuredRow row) {
+    /**
+     * The line step ran beyond the time limit: the task gets the estimator's row, kept ok, with a
+     * warning naming the line finder's bundle, and its thread is abandoned.
+     */
+    private void linesTimedOut(Task t) {
         String reason = String.format(Locale.ROOT, "lines not measured: the line step ran beyond the time limit of %s s (bundle %s); abandoned",
                 seconds(timeLimit), lineStep.bundle());
+        if (!t.result.complete(t.beforeLines.toBuilder().warning(reason).build())) {
+            return;
+        }
         count(lineStep.bundle(), MeasuredRow.FAULT_TIMED_OUT, reason);
+        abandon(t);
         if (linesHung.incrementAndGet() >= MAX_HUNG && linesDisabledReason == null) {
             linesDisabledReason = "lines not measured: the line step was disabled for the rest of the run after " + MAX_HUNG
                     + " spectra exceeded the time limit (bundle " + lineStep.bundle() + ")";
         }
-        return row.toBuilder().warning(reason).build();
     }
 
     /**
