@@ -22,6 +22,15 @@ public interface CatalogWriter {
     /** Service property (String[]): file-name endings this writer handles, lower case, no dot. */
     String EXTENSIONS = "redward.catalog.extensions";
 
+    /**
+     * Service property (Boolean): true if the format stores every table of a catalogue in the one
+     * file (FITS extensions, VOTable TABLEs). Absent or false: the format holds one table per file
+     * and the writer may store only the first; a caller with further tables writes each to a
+     * sibling file, its name the main file's with the table's name before the extension
+     * (e.g. {@code cat.lines.csv}).
+     */
+    String MANY_TABLES = "redward.catalog.many-tables";
+
     /** Writes the catalogue to {@code file}, replacing it if present. */
     void write(Catalog catalog, Path file) throws IOException;
 }

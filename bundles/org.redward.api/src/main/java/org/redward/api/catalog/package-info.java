@@ -4,5 +4,5 @@
  * a catalogue of any size is written without holding it in memory.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.0.0")
+@org.osgi.annotation.versioning.Version("1.1.0")
 package org.redward.api.catalog;

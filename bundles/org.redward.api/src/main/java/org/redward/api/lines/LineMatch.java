@@ -18,4 +18,12 @@ public record LineMatch(int detectedIndex, SpectralLine line, double restAngstro
     public LineMatch {
         note = note == null ? "" : note;
     }
+
+    /**
+     * The name to show for this match: the line's own name, or, for an unresolved doublet seen as
+     * one feature (a non-empty {@code note}), its group followed by {@code (unresolved)}.
+     */
+    public String label() {
+        return note.isEmpty() ? line.name() : line.group() + " (unresolved)";
+    }
 }

@@ -10,7 +10,7 @@ import java.util.Optional;
  * What to measure and how: inputs (files, folders, list files), the estimator, template set,
  * instrument profile, velocity frame and cosmology ids, the catalogue file (its extension picks
  * the format), the number of worker threads, whether to resume an interrupted run, the time
- * bound per spectrum and the redshift range. Immutable; start from {@link #of(List)} and use
+ * bound per spectrum, the redshift range, and whether lines are measured too. Immutable; start from {@link #of(List)} and use
  * the {@code with...} copies.
  */
 public final class MeasureRequest {
@@ -32,10 +32,11 @@ public final class MeasureRequest {
     private final double zMax;
     private final long sliceFirst;
     private final long sliceCount;
+    private final boolean lines;
 
     private MeasureRequest(List<Path> inputs, String estimatorId, String templatesId, String profileId, String frame,
             String cosmologyId, Path output, int threads, boolean resume, Duration timeLimit, double zMin, double zMax,
-            long sliceFirst, long sliceCount) {
+            long sliceFirst, long sliceCount, boolean lines) {
         this.inputs = List.copyOf(inputs);
         this.estimatorId = estimatorId;
         this.templatesId = templatesId;
@@ -50,45 +51,46 @@ public final class MeasureRequest {
         this.zMax = zMax;
         this.sliceFirst = sliceFirst;
         this.sliceCount = sliceCount;
+        this.lines = lines;
     }
 
     /** Default estimator and templates, no profile, no frame correction, default cosmology, all cores, no file. */
     public static MeasureRequest of(List<Path> inputs) {
-        return new MeasureRequest(inputs, null, null, null, null, null, null, 0, false, DEFAULT_TIME_LIMIT, -0.005, 4.0, 0, -1);
+        return new MeasureRequest(inputs, null, null, null, null, null, null, 0, false, DEFAULT_TIME_LIMIT, -0.005, 4.0, 0, -1, false);
     }
 
     public MeasureRequest withInputs(List<Path> v) {
-        return new MeasureRequest(v, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(v, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** The estimator id (null: the platform's default). */
     public MeasureRequest withEstimator(String id) {
-        return new MeasureRequest(inputs, blank(id), templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, blank(id), templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** The template set id (null: the default set, for estimators that use templates). */
     public MeasureRequest withTemplates(String id) {
-        return new MeasureRequest(inputs, estimatorId, blank(id), profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, blank(id), profileId, frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** A forced instrument profile id (null: found by sniffing). */
     public MeasureRequest withProfile(String id) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, blank(id), frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, blank(id), frame, cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** The velocity frame for the corrected columns ({@code bary}, {@code helio}, {@code cmb}, {@code lg}; null: none). */
     public MeasureRequest withFrame(String f) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, blank(f), cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, blank(f), cosmologyId, output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** The named cosmology for the distance columns (null: the platform's default). */
     public MeasureRequest withCosmology(String id) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, blank(id), output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, blank(id), output, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** The catalogue file (null: rows go only to the listener). */
     public MeasureRequest withOutput(Path file) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, file, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, file, threads, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** Worker threads (0: one per available core). */
@@ -96,12 +98,12 @@ public final class MeasureRequest {
         if (n < 0) {
             throw new IllegalArgumentException("threads must be 0 (all cores) or positive: " + n);
         }
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, n, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, n, resume, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** Resume the interrupted run whose journal sits beside the output file. */
     public MeasureRequest withResume(boolean r) {
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, r, timeLimit, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, r, timeLimit, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** The most one spectrum may take (reading excluded); beyond it the spectrum fails and the run goes on. */
@@ -110,7 +112,7 @@ public final class MeasureRequest {
         if (d.isNegative() || d.isZero()) {
             throw new IllegalArgumentException("time limit must be positive: " + d);
         }
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, d, zMin, zMax, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, d, zMin, zMax, sliceFirst, sliceCount, lines);
     }
 
     /** The redshift range searched; solutions outside it count as nonsense from the estimator. */
@@ -118,7 +120,7 @@ public final class MeasureRequest {
         if (!(min < max)) {
             throw new IllegalArgumentException("redshift range: minimum " + min + " is not below maximum " + max);
         }
-        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, min, max, sliceFirst, sliceCount);
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit, min, max, sliceFirst, sliceCount, lines);
     }
 
     /**
@@ -135,7 +137,16 @@ public final class MeasureRequest {
             throw new IllegalArgumentException("slice: first " + first + " must be >= 0 and count " + count + " >= 1 (or -1: to the end)");
         }
         return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit,
-                zMin, zMax, first, count);
+                zMin, zMax, first, count, lines);
+    }
+
+    /**
+     * Also find, measure and identify the lines of every spectrum measured ok, at its catalogue z
+     * (off by default: then no line is measured). The catalogue gets a second table of lines.
+     */
+    public MeasureRequest withLines(boolean measureLines) {
+        return new MeasureRequest(inputs, estimatorId, templatesId, profileId, frame, cosmologyId, output, threads, resume, timeLimit,
+                zMin, zMax, sliceFirst, sliceCount, measureLines);
     }
 
     public List<Path> inputs() { return inputs; }
@@ -155,6 +166,8 @@ public final class MeasureRequest {
     public long sliceFirst() { return sliceFirst; }
     /** Spectra measured from {@link #sliceFirst()}; -1 for all to the end. */
     public long sliceCount() { return sliceCount; }
+    /** True if the lines of every spectrum are measured too ({@link #withLines}). */
+    public boolean lines() { return lines; }
 
     private static String blank(String s) {
         return s == null || s.isBlank() ? null : s.trim();

@@ -16,12 +16,20 @@ import java.util.Optional;
  * @param seconds wall-clock seconds of this run (resumed rows excluded)
  * @param catalog the catalogue file written, if any
  * @param misbehaving bundle (symbolic name and version) to a one-line account (counts and an example)
+ * @param lines lines measured in all rows (0 unless the run measured lines)
+ * @param spectraWithLines rows with at least one measured line
  */
 public record MeasureSummary(long total, long ok, long failed, long resumed, double seconds, Optional<Path> catalog,
-        Map<String, String> misbehaving) {
+        Map<String, String> misbehaving, long lines, long spectraWithLines) {
 
     public MeasureSummary {
         misbehaving = Map.copyOf(misbehaving);
+    }
+
+    /** A summary of a run that measured no lines. */
+    public MeasureSummary(long total, long ok, long failed, long resumed, double seconds, Optional<Path> catalog,
+            Map<String, String> misbehaving) {
+        this(total, ok, failed, resumed, seconds, catalog, misbehaving, 0, 0);
     }
 
     /** Spectra measured per second in this run (resumed rows excluded). */

@@ -14,7 +14,8 @@ import org.redward.api.redshift.Alternative;
  * catalogue begins with ({@code source, index, id, status, error, z, z_err, class, grade,
  * estimator, alternatives}), the sky position, warnings a user must see, the time taken, the
  * plug-in at fault when one misbehaved, and the derived quantities (frame velocities, distances
- * and their uncertainties) by column name with the unit in the name.
+ * and their uncertainties) by column name with the unit in the name, and the measured lines when
+ * the run measured them.
  *
  * <p>Immutable and thread-safe. Build with {@link #builder()}.
  */
@@ -52,6 +53,7 @@ public final class MeasuredRow {
     private final String fault;
     private final String faultBundle;
     private final Map<String, Double> derived;
+    private final List<MeasuredLine> lines;
 
     private MeasuredRow(Builder b) {
         sequence = b.sequence;
@@ -76,6 +78,7 @@ public final class MeasuredRow {
         fault = b.fault;
         faultBundle = b.faultBundle;
         derived = Collections.unmodifiableMap(new LinkedHashMap<>(b.derived));
+        lines = List.copyOf(b.lines);
     }
 
     public static Builder builder() {
@@ -106,6 +109,7 @@ public final class MeasuredRow {
         b.fault = fault;
         b.faultBundle = faultBundle;
         b.derived.putAll(derived);
+        b.lines.addAll(lines);
         return b;
     }
 
@@ -149,6 +153,11 @@ public final class MeasuredRow {
     public Map<String, Double> derived() { return derived; }
     /** One derived quantity, NaN if absent. */
     public double derived(String column) { return derived.getOrDefault(column, Double.NaN); }
+    /**
+     * The lines measured in the spectrum, by increasing observed wavelength (only when the run was
+     * asked for them with {@link MeasureRequest#withLines}; empty otherwise, or when none was found).
+     */
+    public List<MeasuredLine> lines() { return lines; }
 
     @Override
     public boolean equals(Object o) {
@@ -162,7 +171,7 @@ public final class MeasuredRow {
                 && estimator.equals(r.estimator) && alternatives.equals(r.alternatives)
                 && Double.compare(raDeg, r.raDeg) == 0 && Double.compare(decDeg, r.decDeg) == 0
                 && warnings.equals(r.warnings) && fault.equals(r.fault) && faultBundle.equals(r.faultBundle)
-                && derived.equals(r.derived);
+                && derived.equals(r.derived) && lines.equals(r.lines);
     }
 
     /** Equality ignores {@link #seconds()} (timing differs between runs); see {@link #equals}. */
@@ -201,6 +210,7 @@ public final class MeasuredRow {
         private String fault = "";
         private String faultBundle = "";
         private final Map<String, Double> derived = new LinkedHashMap<>();
+        private final List<MeasuredLine> lines = new ArrayList<>();
 
         private Builder() {
         }
@@ -222,6 +232,8 @@ public final class MeasuredRow {
         public Builder fault(String what, String bundle) { fault = nn(what); faultBundle = nn(bundle); return this; }
         public Builder derived(String column, double value) { derived.put(column, value); return this; }
         public Builder derived(Map<String, Double> values) { derived.putAll(values); return this; }
+        /** The measured lines (replacing any given before). */
+        public Builder lines(List<MeasuredLine> l) { lines.clear(); lines.addAll(l); return this; }
 
         public MeasuredRow build() {
             if (OK.equals(status) && !Double.isFinite(z)) {

@@ -4,5 +4,5 @@
  * (the demo, the workbench) alike.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.1.0")
+@org.osgi.annotation.versioning.Version("1.2.0")
 package org.redward.api.survey;

@@ -40,17 +40,22 @@ final class StilWriters {
     }
 
     /**
-     * FITS: an empty primary HDU, the catalogue as a binary table (units in TUNITn, strings as
-     * fixed-width A columns, NaN for missing numbers), then a {@code provenance} binary table
+     * FITS: an empty primary HDU, each table of the catalogue as a binary table (EXTNAME the
+     * table's name in upper case, e.g. {@code REDSHIFTS}, {@code LINES}; units in TUNITn, strings
+     * as fixed-width A columns, NaN for missing numbers), then a {@code PROVENANCE} binary table
      * (key, value). STIL sizes strings with a first pass over the rows.
      */
     @Component(property = {Provided.ID + "=fits", Provided.DESCRIPTION + "=FITS binary tables (units in TUNITn) with a provenance table",
-            CatalogWriter.EXTENSIONS + "=fits", CatalogWriter.EXTENSIONS + "=fit", CatalogWriter.EXTENSIONS + "=fits.gz"})
+            CatalogWriter.EXTENSIONS + "=fits", CatalogWriter.EXTENSIONS + "=fit", CatalogWriter.EXTENSIONS + "=fits.gz",
+            CatalogWriter.MANY_TABLES + ":Boolean=true"})
     public static final class Fits implements CatalogWriter {
         @Override
         public void write(Catalog catalog, Path file) throws IOException {
             List<StarTable> tables = new ArrayList<>(StilTables.of(catalog));
             tables.add(StilTables.provenance(catalog));
+            for (StarTable t : tables) {
+                t.setName(t.getName().toUpperCase(java.util.Locale.ROOT)); // EXTNAME in upper case (FITS common practice)
+            }
             FitsTableWriter w = new FitsTableWriter();
             w.setPrimaryType(FitsTableWriter.PrimaryType.BASIC);
             w.setWriteDate(false);
@@ -62,9 +67,10 @@ final class StilWriters {
         }
     }
 
-    /** VOTable 1.4 (TABLEDATA), units and UCDs on FIELDs, the provenance as PARAMs. */
+    /** VOTable 1.4 (TABLEDATA): every table of the catalogue a TABLE, units and UCDs on FIELDs, the provenance as PARAMs of the first. */
     @Component(property = {Provided.ID + "=votable", Provided.DESCRIPTION + "=IVOA VOTable 1.4 (units, UCDs, provenance as PARAMs)",
-            CatalogWriter.EXTENSIONS + "=vot", CatalogWriter.EXTENSIONS + "=xml", CatalogWriter.EXTENSIONS + "=votable"})
+            CatalogWriter.EXTENSIONS + "=vot", CatalogWriter.EXTENSIONS + "=xml", CatalogWriter.EXTENSIONS + "=votable",
+            CatalogWriter.MANY_TABLES + ":Boolean=true"})
     public static final class VoTable implements CatalogWriter {
         @Override
         public void write(Catalog catalog, Path file) throws IOException {
@@ -77,7 +83,10 @@ final class StilWriters {
         }
     }
 
-    /** ECSV (Astropy's Enhanced Character Separated Values): units, UCDs and provenance in the YAML header. */
+    /**
+     * ECSV (Astropy's Enhanced Character Separated Values): units, UCDs and provenance in the YAML
+     * header. One table per file: only the first table of the catalogue is written.
+     */
     @Component(property = {Provided.ID + "=ecsv", Provided.DESCRIPTION + "=ECSV (units, UCDs and provenance in the YAML header)",
             CatalogWriter.EXTENSIONS + "=ecsv"})
     public static final class Ecsv implements CatalogWriter {

@@ -74,6 +74,74 @@ class RoundTripTest {
         return Catalog.of("test catalogue", prov, List.of(new CatalogTable("redshifts", "rows", COLUMNS, rows, it)));
     }
 
+    /** A second table of invented measured lines (keyed to the main table by sequence), as {@code measure --lines} writes. */
+    static final List<Column> LINE_COLUMNS = List.of(
+            Column.ofLong("sequence", "meta.number", "position of the spectrum in the run"),
+            Column.ofString("line", "meta.id;spect.line", "identification"),
+            Column.ofDouble("observed_wavelength_angstrom", "Angstrom", "em.wl.central", "observed centre"),
+            Column.ofDouble("fwhm_km_s", "km/s", "spect.line.width", "FWHM"),
+            Column.ofBoolean("blended", "meta.code", "fitted with neighbours"));
+
+    static Catalog withLines(int rows) {
+        Catalog main = catalog(rows);
+        List<Object[]> lines = new ArrayList<>();
+        for (int k = 0; k < rows; k++) {
+            lines.add(new Object[] {(long) k, k % 2 == 0 ? "invented-line-a" : "", 4000.0 + k, k % 3 == 0 ? Double.NaN : 100.0 + k, k % 4 == 0});
+            lines.add(new Object[] {(long) k, "invented-line-b", 5000.0 + k, 200.0, false});
+        }
+        return Catalog.of(main.title(), main.provenance(), List.of(main.tables().get(0),
+                new CatalogTable("lines", "one row per line", LINE_COLUMNS, lines.size(), lines)));
+    }
+
+    @Test
+    void aSecondTableBecomesASecondFitsExtensionWithItsUnits() throws Exception {
+        Path f = dir.resolve("lines.fits");
+        new StilWriters.Fits().write(withLines(20), f);
+        try (Fits fits = new Fits(f.toFile())) {
+            BasicHDU<?>[] hdus = fits.read();
+            assertEquals(4, hdus.length, "primary, catalogue, lines, provenance");
+            BinaryTableHDU t = (BinaryTableHDU) hdus[2];
+            Header h = t.getHeader();
+            assertEquals("LINES", h.getStringValue("EXTNAME"));
+            assertEquals(40, t.getNRows());
+            int obs = t.findColumn("observed_wavelength_angstrom");
+            assertEquals("Angstrom", h.getStringValue("TUNIT" + (obs + 1)));
+            assertEquals("km/s", h.getStringValue("TUNIT" + (t.findColumn("fwhm_km_s") + 1)));
+            assertEquals(5007.0, num(t.getElement(15, obs)), 0.0);
+            assertEquals("invented-line-b", ((String) t.getElement(15, t.findColumn("line"))).trim());
+            assertEquals(7L, ((Number) (t.getElement(14, t.findColumn("sequence")) instanceof long[] a ? a[0]
+                    : t.getElement(14, t.findColumn("sequence")))).longValue());
+            assertEquals("REDSHIFTS", ((BinaryTableHDU) hdus[1]).getHeader().getStringValue("EXTNAME").toUpperCase(java.util.Locale.ROOT));
+        }
+    }
+
+    @Test
+    void aSecondTableBecomesASecondVoTableTableThatValidatesAndRoundTrips() throws Exception {
+        Path f = dir.resolve("lines.vot");
+        new StilWriters.VoTable().write(withLines(30), f);
+        validateVoTable(f);
+        List<StarTable> tables = new ArrayList<>();
+        var seq = new StarTableFactory().makeStarTables(uk.ac.starlink.util.DataSource.makeDataSource(f.toString()), "votable");
+        for (StarTable t; (t = seq.nextTable()) != null;) {
+            tables.add(t);
+        }
+        assertEquals(2, tables.size(), "catalogue and lines");
+        checkStil(tables.get(0), 30);
+        StarTable lines = tables.get(1);
+        assertEquals("lines", lines.getName());
+        assertEquals("Angstrom", lines.getColumnInfo(2).getUnitString());
+        assertEquals("spect.line.width", lines.getColumnInfo(3).getUCD());
+        List<Object[]> got = new ArrayList<>();
+        try (var rs = lines.getRowSequence()) {
+            while (rs.next()) {
+                got.add(rs.getRow().clone());
+            }
+        }
+        assertEquals(60, got.size());
+        assertEquals(5003.0, ((Number) got.get(7)[2]).doubleValue(), 0.0);
+        assertEquals(Boolean.TRUE, got.get(8)[4]);
+    }
+
     @Test
     void fitsOpensWithNomTamFitsWithUnitsAndProvenance() throws Exception {
         Path f = dir.resolve("cat.fits");
@@ -104,12 +172,7 @@ class RoundTripTest {
     void voTableValidatesAgainstTheIvoaSchemaAndRoundTripsWithStil() throws Exception {
         Path f = dir.resolve("cat.vot");
         new StilWriters.VoTable().write(catalog(30), f);
-        SchemaFactory sf = SchemaFactory.newInstance(XMLConstants.W3C_XML_SCHEMA_NS_URI);
-        Schema schema;
-        try (InputStream xsd = StarTable.class.getClassLoader().getResourceAsStream("uk/ac/starlink/util/text/VOTable1.4.xsd")) {
-            schema = sf.newSchema(new StreamSource(xsd));
-        }
-        schema.newValidator().validate(new StreamSource(f.toFile()));
+        validateVoTable(f);
         String xml = Files.readString(f);
         assertTrue(xml.contains("http://www.ivoa.net/xml/VOTable/v1.3"), "VOTable 1.4 uses the v1.3 namespace");
         StarTable t = new StarTableFactory().makeStarTable(f.toString(), "votable");
@@ -137,6 +200,16 @@ class RoundTripTest {
         assertEquals("/data/invented-field/plate-0.fits,3,failed,,150.003,,3,false", data.get(4));
         assertTrue(lines.contains("# estimator: invented-estimator"));
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("# column luminosity_distance_mpc [Mpc]")));
+    }
+
+    /** Validates against the IVOA VOTable 1.4 XML schema (the copy shipped inside the STIL jar). */
+    static void validateVoTable(Path f) throws Exception {
+        SchemaFactory sf = SchemaFactory.newInstance(XMLConstants.W3C_XML_SCHEMA_NS_URI);
+        Schema schema;
+        try (InputStream xsd = StarTable.class.getClassLoader().getResourceAsStream("uk/ac/starlink/util/text/VOTable1.4.xsd")) {
+            schema = sf.newSchema(new StreamSource(xsd));
+        }
+        schema.newValidator().validate(new StreamSource(f.toFile()));
     }
 
     private static void checkStil(StarTable t, int rows) throws Exception {

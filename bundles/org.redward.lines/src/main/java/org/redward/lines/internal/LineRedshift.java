@@ -122,7 +122,7 @@ final class LineRedshift {
 
     /** The name of a match: the line, or its group for an unresolved doublet. */
     static String label(LineMatch m) {
-        return m.note().isEmpty() ? m.line().name() : m.line().group() + " (unresolved)";
+        return m.label();
     }
 
     private static String names(RedshiftHypothesis h) {

@@ -56,6 +56,9 @@ public final class MeasureCommand implements Command {
         Path out;
         @Option(names = "--resume", description = "finish the interrupted run whose journal sits beside --out")
         boolean resume;
+        @Option(names = "--lines", description = "also find, measure and identify the lines of every spectrum measured ok, at its z:"
+                + " a second catalogue table 'lines' (FITS extension LINES, VOTable TABLE; beside a .csv/.ecsv as FILE.lines.csv/.ecsv)")
+        boolean lines;
         @Option(names = "--engine", paramLabel = "ENGINE", description = "local (default) or spark: run on Apache Spark with the survey feature")
         String engine = "local";
         @Option(names = "--master", paramLabel = "URL", description = "with --engine spark: the Spark master (default: local[*])")
@@ -84,7 +87,7 @@ public final class MeasureCommand implements Command {
         }
         MeasureRequest req = a.run.request(ctx).withEstimator(a.estimator)
                 .withFrame(a.frame == null ? null : a.frame.toLowerCase(Locale.ROOT)).withCosmology(a.cosmology)
-                .withOutput(a.out == null ? null : ctx.workingDirectory().resolve(a.out)).withResume(a.resume);
+                .withOutput(a.out == null ? null : ctx.workingDirectory().resolve(a.out)).withResume(a.resume).withLines(a.lines);
         PrintStream out = ctx.out();
         MeasureListener listener = a.json ? row -> out.println(RowCodec.toJson(row))
                 : a.out == null ? new TextRows(out) : MeasureListener.none();
@@ -117,15 +120,22 @@ public final class MeasureCommand implements Command {
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());
         }
-        report(ctx.err(), s, heap);
+        report(ctx.err(), s, heap, req);
         return s.total() > 0 && s.ok() == 0 ? 1 : 0;
     }
 
-    static void report(PrintStream err, MeasureSummary s, String heap) {
-        err.printf(Locale.ROOT, "measured %d spectra: %d ok, %d failed%s in %.1f s (%.1f spectra/s)%n", s.total(), s.ok(),
+    static void report(PrintStream err, MeasureSummary s, String heap, MeasureRequest req) {
+        err.printf(Locale.ROOT, "measured %d spectra: %d ok, %d failed%s in %.1f s (%.1f spectra/s)%s%n", s.total(), s.ok(),
                 s.failed(), s.resumed() > 0 ? " (" + s.resumed() + " done by the interrupted run)" : "", s.seconds(),
-                s.spectraPerSecond());
-        s.catalog().ifPresent(c -> err.println("catalogue: " + c));
+                s.spectraPerSecond(), req.lines() ? String.format(Locale.ROOT, "; %d line%s measured in %d spectr%s", s.lines(),
+                        s.lines() == 1 ? "" : "s", s.spectraWithLines(), s.spectraWithLines() == 1 ? "um" : "a") : "");
+        s.catalog().ifPresent(c -> {
+            err.println("catalogue: " + c);
+            if (req.lines()) {
+                Path sibling = SurveyRun.linesFile(c);
+                err.println("lines table: " + (java.nio.file.Files.exists(sibling) ? sibling : c + " (second table, 'lines')"));
+            }
+        });
         err.println(heap);
         for (Map.Entry<String, String> e : s.misbehaving().entrySet()) {
             err.println("misbehaving plug-in: " + e.getKey() + ": " + e.getValue());
@@ -137,6 +147,9 @@ public final class MeasureCommand implements Command {
         a.run.request(ctx); // the same checks of the shared options
         if (a.spectraPerTask != null && a.spectraPerTask < 1) {
             throw new UsageException("--spectra-per-task " + a.spectraPerTask + ": expected a whole number >= 1");
+        }
+        if (a.lines) {
+            throw new UsageException("--engine spark: --lines is for local runs (the Spark job writes the main table only)");
         }
         if (a.resume || a.json) {
             throw new UsageException("--engine spark: " + (a.resume ? "--resume" : "--json")

@@ -36,6 +36,12 @@ import org.redward.spectrum.SpectrumMetadata;
  * threads are still alive the estimator is disabled for the rest of the run (its spectra fail at
  * once, saying so), so that a plug-in that hangs on everything cannot exhaust the machine.
  *
+ * <p>Lines (optional): with a {@link LineStep}, every row the estimator gave ok goes on to the
+ * line step on the same worker, inside the same time bound. A line step that throws or overruns
+ * the time limit leaves the row ok without lines and with a warning naming the reason (after
+ * {@link #MAX_HUNG} overruns the step is skipped for the rest of the run, saying so); its bundle
+ * is listed among the misbehaving. Without a line step nothing of this runs.
+ *
  * <p>One run per instance; not reusable.
  */
 final class Pipeline {
@@ -48,15 +54,24 @@ final class Pipeline {
     private final Estimation estimation;
     private final double zMin;
     private final double zMax;
+    private final LineStep lineStep;
 
     private final BlockingQueue<Task> work = new LinkedBlockingQueue<>();
     private final AtomicInteger hungAlive = new AtomicInteger();
     private final AtomicInteger workerCount = new AtomicInteger();
     private volatile String disabledReason;
+    private volatile String linesDisabledReason;
+    private final AtomicInteger linesHung = new AtomicInteger();
     private final Map<String, int[]> faults = new TreeMap<>();
     private final Map<String, String> faultExamples = new TreeMap<>();
 
     Pipeline(int threads, Duration timeLimit, Estimation estimation, double zMin, double zMax) {
+        this(threads, timeLimit, estimation, zMin, zMax, null);
+    }
+
+    /** @param lineStep the line step run after every ok estimate, or null for none (no per-spectrum cost) */
+    Pipeline(int threads, Duration timeLimit, Estimation estimation, double zMin, double zMax, LineStep lineStep) {
+        this.lineStep = lineStep;
         this.threads = Math.max(1, threads);
         this.timeLimit = timeLimit;
         this.estimation = estimation;
@@ -71,6 +86,8 @@ final class Pipeline {
         final CompletableFuture<MeasuredRow> result = new CompletableFuture<>();
         final AtomicReference<Thread> thread = new AtomicReference<>();
         volatile long startNanos;
+        /** The estimator's ok row while the line step runs (given without lines if that step overruns). */
+        volatile MeasuredRow beforeLines;
 
         Task(long sequence, SpectrumRecord record) {
             this.sequence = sequence;
@@ -215,21 +232,19 @@ final class Pipeline {
         while (true) {
             long started = t.startNanos;
             long waitNanos = started == 0 ? TimeUnit.MILLISECONDS.toNanos(100) : started + limitNanos - System.nanoTime();
-            if (started != 0 && waitNanos <= 0) {
-                MeasuredRow timedOut = fault(base(t), MeasuredRow.FAULT_TIMED_OUT, String.format(Locale.ROOT,
-                        "estimator gave no answer within the time limit of %s s (bundle %s); abandoned",
-                        seconds(timeLimit), estimation.bundle())).build();
-                if (t.result.complete(timedOut)) {
-                    hungAlive.incrementAndGet();
-                    Thread th = t.thread.get();
-                    if (th != null) {
-                        th.interrupt();
-                    }
+            // a task done in time but collected late (behind a slow one) is not timed out: counts only when this completes it
+            if (started != 0 && waitNanos <= 0 && !t.result.isDone() && t.beforeLines != null) {
+                linesTimedOut(t);
+            } else if (started != 0 && waitNanos <= 0 && !t.result.isDone()) {
+                String reason = String.format(Locale.ROOT, "estimator gave no answer within the time limit of %s s (bundle %s); abandoned",
+                        seconds(timeLimit), estimation.bundle());
+                if (t.result.complete(base(t).failed(reason).fault(MeasuredRow.FAULT_TIMED_OUT, estimation.bundle()).build())) {
+                    count(estimation.bundle(), MeasuredRow.FAULT_TIMED_OUT, reason);
+                    abandon(t);
                     if (hungAlive.get() >= MAX_HUNG && disabledReason == null) {
                         disabledReason = "estimator disabled for the rest of the run after " + MAX_HUNG
                                 + " spectra exceeded the time limit (bundle " + estimation.bundle() + ")";
                     }
-                    startWorker();
                 }
             }
             try {
@@ -239,6 +254,57 @@ final class Pipeline {
             } catch (ExecutionException e) {
                 return fault(base(t), MeasuredRow.FAULT_THREW, "internal error: " + e.getCause()).build();
             }
+        }
+    }
+
+    /** Gives up the task's worker thread (interrupted, left to end on its own) and starts another. */
+    private void abandon(Task t) {
+        hungAlive.incrementAndGet();
+        Thread th = t.thread.get();
+        if (th != null) {
+            th.interrupt();
+        }
+        startWorker();
+    }
+
+    /**
+     * The line step ran beyond the time limit: the task gets the estimator's row, kept ok, with a
+     * warning naming the line finder's bundle, and its thread is abandoned.
+     */
+    private void linesTimedOut(Task t) {
+        String reason = String.format(Locale.ROOT, "lines not measured: the line step ran beyond the time limit of %s s (bundle %s); abandoned",
+                seconds(timeLimit), lineStep.bundle());
+        if (!t.result.complete(t.beforeLines.toBuilder().warning(reason).build())) {
+            return;
+        }
+        count(lineStep.bundle(), MeasuredRow.FAULT_TIMED_OUT, reason);
+        abandon(t);
+        if (linesHung.incrementAndGet() >= MAX_HUNG && linesDisabledReason == null) {
+            linesDisabledReason = "lines not measured: the line step was disabled for the rest of the run after " + MAX_HUNG
+                    + " spectra exceeded the time limit (bundle " + lineStep.bundle() + ")";
+        }
+    }
+
+    /**
+     * The line step on an ok row: the row with its lines, or, if the step throws, the row still ok
+     * with a warning naming the reason (the line finder's bundle is counted as misbehaving).
+     */
+    private MeasuredRow withLines(Task t, Spectrum s, MeasuredRow r) {
+        String disabled = linesDisabledReason;
+        if (disabled != null) {
+            return r.toBuilder().warning(disabled).build();
+        }
+        t.beforeLines = r;
+        try {
+            return lineStep.measure(t.record, s, r);
+        } catch (Throwable e) {
+            if (e instanceof InterruptedException) {
+                Thread.currentThread().interrupt();
+            }
+            String reason = "lines not measured: the line step threw " + e.getClass().getSimpleName()
+                    + (e.getMessage() == null ? "" : ": " + e.getMessage()) + " (bundle " + lineStep.bundle() + ")";
+            count(lineStep.bundle(), MeasuredRow.FAULT_THREW, reason);
+            return r.toBuilder().warning(reason).build();
         }
     }
 
@@ -282,6 +348,9 @@ final class Pipeline {
                 return fault(base(t), MeasuredRow.FAULT_NONSENSE, "estimator returned nonsense: " + bad + " (bundle "
                         + estimation.bundle() + ")").estimator(r.estimator()).build();
             }
+            if (lineStep != null) {
+                r = withLines(t, s, r);
+            }
         }
         return r;
     }
@@ -319,6 +388,12 @@ final class Pipeline {
 
     private MeasuredRow.Builder fault(MeasuredRow.Builder row, String what, String reason) {
         String bundle = estimation.bundle();
+        count(bundle, what, reason);
+        return row.failed(reason).fault(what, bundle);
+    }
+
+    /** Counts a misbehaviour of a bundle (for {@link #misbehaving()}). */
+    private void count(String bundle, String what, String reason) {
         synchronized (faults) {
             int[] c = faults.computeIfAbsent(bundle, k -> new int[4]);
             switch (what) {
@@ -329,7 +404,6 @@ final class Pipeline {
             }
             faultExamples.putIfAbsent(bundle, reason);
         }
-        return row.failed(reason).fault(what, bundle);
     }
 
     private static double seconds(long t0) {

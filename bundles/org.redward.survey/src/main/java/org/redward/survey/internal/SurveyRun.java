@@ -41,6 +41,8 @@ final class SurveyRun {
     private final List<Column> derivedColumns;
     private final Map<String, String> provenance;
     private LongConsumer progress = n -> { };
+    private LineStep lineStep;
+    private boolean linesInMainFile = true;
 
     SurveyRun(MeasureRequest request, Estimation estimation, Feed.Source feeds, Optional<CatalogWriter> writer,
             List<Column> derivedColumns, Map<String, String> provenance) {
@@ -61,7 +63,33 @@ final class SurveyRun {
         return this;
     }
 
+    /**
+     * Measures lines too (the request must ask for them: {@link MeasureRequest#lines()}).
+     *
+     * @param step the line step
+     * @param writerHoldsManyTables whether the catalogue writer stores the lines table in the same
+     *     file (FITS, VOTable); otherwise it goes to a sibling file ({@link #linesFile})
+     */
+    SurveyRun lines(LineStep step, boolean writerHoldsManyTables) {
+        if (!request.lines()) {
+            throw new IllegalArgumentException("a line step for a request without lines");
+        }
+        this.lineStep = step;
+        this.linesInMainFile = writerHoldsManyTables;
+        return this;
+    }
+
+    /** The sibling file that holds the lines table when the format keeps one table per file: {@code cat.lines.csv}. */
+    static Path linesFile(Path catalog) {
+        String name = catalog.getFileName().toString();
+        int dot = name.lastIndexOf('.');
+        return catalog.resolveSibling(dot > 0 ? name.substring(0, dot) + ".lines" + name.substring(dot) : name + ".lines");
+    }
+
     MeasureSummary run(MeasureListener listener) throws IOException, InterruptedException {
+        if (request.lines() && lineStep == null) {
+            throw new IllegalArgumentException("--lines: no line step was given");
+        }
         boolean sliced = request.sliceFirst() > 0 || request.sliceCount() >= 0;
         if (sliced && request.resume()) {
             throw new IllegalArgumentException("--resume: a run of a slice of the inputs cannot be resumed; run the slice again");
@@ -81,7 +109,7 @@ final class SurveyRun {
                 state = Journal.recover(jf);
                 if (!state.fingerprint().equals(fingerprint)) {
                     throw new IllegalArgumentException("the journal " + jf + " belongs to a run with other inputs or options"
-                            + " (estimator, templates, profile, frame, cosmology, redshift range): repeat them exactly, or delete the journal");
+                            + " (estimator, templates, profile, frame, cosmology, redshift range, --lines): repeat them exactly, or delete the journal");
                 }
                 journal = Journal.append(jf);
             } else {
@@ -93,8 +121,8 @@ final class SurveyRun {
         }
         listener.started(state.rows());
         int threads = request.threads() > 0 ? request.threads() : Runtime.getRuntime().availableProcessors();
-        Pipeline pipeline = new Pipeline(threads, request.timeLimit(), estimation, request.zMin(), request.zMax());
-        long[] counts = new long[2];
+        Pipeline pipeline = new Pipeline(threads, request.timeLimit(), estimation, request.zMin(), request.zMax(), lineStep);
+        long[] counts = new long[4];
         long t0 = System.nanoTime();
         final Journal j = journal;
         try (Feed feed = sliced ? limit(feeds.open(request.inputs()),
@@ -109,6 +137,10 @@ final class SurveyRun {
                     }
                 }
                 counts[row.ok() ? 0 : 1]++;
+                if (!row.lines().isEmpty()) {
+                    counts[2] += row.lines().size();
+                    counts[3]++;
+                }
                 listener.row(row);
                 progress.accept(1);
             });
@@ -123,14 +155,19 @@ final class SurveyRun {
         long newRows = counts[0] + counts[1];
         long ok = counts[0];
         long failed = counts[1];
+        long lines = counts[2];
+        long withLines = counts[3];
         if (out.isPresent()) {
-            long[] all = countJournal(journal.file());
-            ok = all[0];
-            failed = all[1];
-            writeCatalog(out.get(), journal.file(), files, ok + failed, pipeline.misbehaving());
+            JournalCounts all = countJournal(journal.file(), request.lines());
+            ok = all.ok();
+            failed = all.failed();
+            lines = all.lines();
+            withLines = all.spectraWithLines();
+            writeCatalog(out.get(), journal.file(), files, all, pipeline.misbehaving());
             Files.delete(journal.file());
         }
-        return new MeasureSummary(state.rows() + newRows, ok, failed, state.rows(), seconds, out, pipeline.misbehaving());
+        return new MeasureSummary(state.rows() + newRows, ok, failed, state.rows(), seconds, out, pipeline.misbehaving(),
+                lines, withLines);
     }
 
     /** The feed cut after {@code end} records ({@code end} below 0: not cut); reading stops there. */
@@ -157,25 +194,64 @@ final class SurveyRun {
         };
     }
 
-    private static long[] countJournal(Path jf) {
-        long[] c = new long[2];
-        for (MeasuredRow r : Journal.rows(jf)) {
-            c[r.ok() ? 0 : 1]++;
+    /** What a finished journal holds: rows ok and failed, lines, rows with lines, and the lines' flux units. */
+    record JournalCounts(long ok, long failed, long lines, long spectraWithLines, java.util.Set<String> fluxUnits) {
+        long rows() {
+            return ok + failed;
         }
-        return c;
     }
 
-    private void writeCatalog(Path out, Path journalFile, List<Path> files, long rows, Map<String, String> misbehaving)
+    private static JournalCounts countJournal(Path jf, boolean lines) {
+        long[] c = new long[4];
+        java.util.Set<String> units = new java.util.TreeSet<>();
+        for (MeasuredRow r : Journal.rows(jf)) {
+            c[r.ok() ? 0 : 1]++;
+            if (lines && !r.lines().isEmpty()) {
+                c[2] += r.lines().size();
+                c[3]++;
+                r.lines().forEach(l -> units.add(l.fluxUnit()));
+            }
+        }
+        return new JournalCounts(c[0], c[1], c[2], c[3], units);
+    }
+
+    private void writeCatalog(Path out, Path journalFile, List<Path> files, JournalCounts counts, Map<String, String> misbehaving)
             throws IOException {
         CatalogLayout layout = new CatalogLayout(derivedColumns);
         Map<String, String> prov = new LinkedHashMap<>(provenance);
         prov.put("run.fingerprint", fingerprint(files));
-        prov.put("run.rows", Long.toString(rows));
+        prov.put("run.rows", Long.toString(counts.rows()));
+        if (lineStep != null) {
+            prov.putAll(lineStep.provenance());
+            prov.put("run.lines", Long.toString(counts.lines()));
+        }
         misbehaving.forEach((b, what) -> prov.put("misbehaved." + b, what));
         inputChecksums(files, prov);
         CatalogTable table = new CatalogTable("redshifts", "one row per spectrum: redshift, class, grade, velocities, distances",
-                layout.columns(), rows, layout.cells(Journal.rows(journalFile)));
-        Catalog catalog = Catalog.of("Redward redshift catalogue", prov, List.of(table));
+                layout.columns(), counts.rows(), layout.cells(Journal.rows(journalFile)));
+        if (lineStep == null) {
+            writeAtomically(Catalog.of("Redward redshift catalogue", prov, List.of(table)), out);
+            return;
+        }
+        LineLayout lines = new LineLayout(counts.fluxUnits());
+        CatalogTable lineTable = new CatalogTable(LineLayout.TABLE, LineLayout.DESCRIPTION, lines.columns(), counts.lines(),
+                lines.cells(Journal.rows(journalFile)));
+        if (linesInMainFile) {
+            writeAtomically(Catalog.of("Redward redshift catalogue", prov, List.of(table, lineTable)), out);
+            return;
+        }
+        // one table per file: the lines table goes first to its sibling file, then the main file (so a main file
+        // in place means both are complete)
+        Path sibling = linesFile(out);
+        Map<String, String> lineProv = new LinkedHashMap<>(prov);
+        lineProv.put("lines.of", out.getFileName().toString());
+        prov.put("lines.file", sibling.getFileName().toString());
+        writeAtomically(Catalog.of("Redward measured lines", lineProv, List.of(lineTable)), sibling);
+        writeAtomically(Catalog.of("Redward redshift catalogue", prov, List.of(table)), out);
+    }
+
+    /** Writes under a temporary name beside {@code out} and moves it into place (atomically where the file system can). */
+    private void writeAtomically(Catalog catalog, Path out) throws IOException {
         Path tmp = out.resolveSibling("." + out.getFileName() + ".part");
         try {
             writer.orElseThrow().write(catalog, tmp);
@@ -240,6 +316,9 @@ final class SurveyRun {
                 .append("frame=").append(request.frame().orElse("")).append('\n')
                 .append("cosmology=").append(request.cosmologyId().orElse("")).append('\n')
                 .append("z=").append(request.zMin()).append(',').append(request.zMax()).append('\n');
+        if (request.lines()) {
+            sb.append("lines=on\n");
+        }
         for (Column c : derivedColumns) {
             sb.append("column=").append(c.name()).append('\n');
         }

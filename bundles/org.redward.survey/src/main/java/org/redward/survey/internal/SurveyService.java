@@ -24,6 +24,12 @@ import org.redward.api.formats.InstrumentProfile;
 import org.redward.api.formats.ProfileRegistry;
 import org.redward.api.formats.ReadOptions;
 import org.redward.api.formats.SpectrumInputs;
+import org.redward.api.lines.LineFinder;
+import org.redward.api.lines.LineFinderRegistry;
+import org.redward.api.lines.LineIdentifier;
+import org.redward.api.lines.LineIdentifierRegistry;
+import org.redward.api.lines.LineList;
+import org.redward.api.lines.LineListRegistry;
 import org.redward.api.redshift.EstimationContext;
 import org.redward.api.redshift.EstimatorRegistry;
 import org.redward.api.redshift.RedshiftEstimator;
@@ -86,6 +92,12 @@ public final class SurveyService implements SurveyMeasurer {
     volatile CosmologyCalculator calculator;
     @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
     volatile FrameCorrector frames;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
+    volatile LineFinderRegistry lineFinders;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
+    volatile LineIdentifierRegistry lineIdentifiers;
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC, policyOption = ReferencePolicyOption.GREEDY)
+    volatile LineListRegistry lineLists;
 
     @Override
     public MeasureSummary measure(MeasureRequest request, MeasureListener listener) throws IOException {
@@ -133,14 +145,20 @@ public final class SurveyService implements SurveyMeasurer {
             }
         }
         Optional<CatalogWriter> writer = Optional.empty();
+        boolean manyTables = false;
         if (request.output().isPresent()) {
-            writer = Optional.of(writers.forFile(request.output().get()).orElseThrow(() -> new IllegalArgumentException(
+            Provided<CatalogWriter> w = writers.forFile(request.output().get()).orElseThrow(() -> new IllegalArgumentException(
                     "--out " + request.output().get() + ": no catalogue writer for this extension (writers: "
-                            + (writers.ids().isEmpty() ? "none" : String.join(", ", writers.ids())) + ")")).service());
+                            + (writers.ids().isEmpty() ? "none" : String.join(", ", writers.ids())) + ")"));
+            writer = Optional.of(w.service());
+            manyTables = Boolean.TRUE.equals(w.properties().get(CatalogWriter.MANY_TABLES));
         }
         SurveyRun run = new SurveyRun(request, new EstimatorEstimation(est, ctx, enricher),
                 new FacadeFeed(inputs, read), writer, enricher.columns(), prov)
                 .progress(progress);
+        if (request.lines()) {
+            run.lines(lineStep(), manyTables);
+        }
         try {
             return run.run(listener);
         } catch (InterruptedException e) {
@@ -185,6 +203,28 @@ public final class SurveyService implements SurveyMeasurer {
         CatalogLayout layout = new CatalogLayout(enricher(request, new LinkedHashMap<>()).columns());
         Iterable<Object[]> cells = layout.cells(rows);
         return new org.redward.api.catalog.CatalogTable("catalog", "redshifts measured by redward", layout.columns(), rowCount, cells);
+    }
+
+    /**
+     * The line step of {@code --lines}: the default line finder and identifier and the standard
+     * line list, through their registries (the first installed when the default is absent).
+     */
+    private LineStep lineStep() {
+        LineFinderRegistry f = lineFinders;
+        LineIdentifierRegistry i = lineIdentifiers;
+        LineListRegistry l = lineLists;
+        if (f == null || i == null || l == null) {
+            throw new IllegalArgumentException("--lines: the line services (finder, identifier, line lists) are not installed");
+        }
+        Provided<LineFinder> finder = f.find(LineFinderRegistry.DEFAULT).or(() -> f.providers().stream().findFirst())
+                .orElseThrow(() -> new IllegalArgumentException("--lines: no line finder is installed"));
+        Provided<LineIdentifier> identifier = i.find(LineIdentifierRegistry.DEFAULT).or(() -> i.providers().stream().findFirst())
+                .orElseThrow(() -> new IllegalArgumentException("--lines: no line identifier is installed"));
+        LineList list = l.find(LineListRegistry.STANDARD).orElseThrow(() -> new IllegalArgumentException(
+                "--lines: the line list '" + LineListRegistry.STANDARD + "' is not installed")).service();
+        ProfileRegistry reg = profiles;
+        return new ServiceLineStep(finder, identifier, list, id -> reg.find(id)
+                .map(p -> p.service().maskedRegionsVacuumAngstrom()).orElse(List.of()));
     }
 
     /** Frame velocities and distances, when the cosmology services are installed. */

@@ -34,16 +34,27 @@ class ResumeAfterKillTest {
 
     @Test
     void killNineAtRandomMomentsThenResumeGivesTheUninterruptedCatalogue() throws Exception {
+        killAndResume(FILES, PER_FILE, false);
+    }
+
+    /** The same with {@code --lines}, on 600 invented line spectra: the lines table equals the uninterrupted run's too. */
+    @Test
+    void withLinesTheLinesTableOfAKilledAndResumedRunEqualsTheUninterruptedOne() throws Exception {
+        List<String> lines = killAndResume(6, PER_FILE, true).stream().filter(l -> l.startsWith("lines: ")).toList();
+        assertTrue(lines.size() >= 3 * 6 * PER_FILE * 9 / 10, "about three lines per spectrum: " + lines.size());
+    }
+
+    private List<String> killAndResume(int files, int perFile, boolean withLines) throws Exception {
         Path refDir = Files.createDirectory(dir.resolve("ref"));
         Path ref = refDir.resolve("cat.txt");
         long t0 = System.nanoTime();
-        assertEquals(0, start(ref).waitFor());
+        assertEquals(0, start(ref, files, perFile, withLines).waitFor());
         long referenceMillis = (System.nanoTime() - t0) / 1_000_000;
         List<String> expected = new ArrayList<>();
         for (String line : Files.readAllLines(ref)) {
             expected.add(line.replace(refDir.toString(), dir.resolve("run").toString()));
         }
-        assertEquals(FILES * PER_FILE, expected.size());
+        assertEquals(files * perFile, expected.stream().filter(l -> !l.startsWith("lines: ")).count());
 
         Path runDir = Files.createDirectory(dir.resolve("run"));
         Path out = runDir.resolve("cat.txt");
@@ -53,7 +64,7 @@ class ResumeAfterKillTest {
         // kill at random moments (the machine may be loaded or idle: scale by the reference run); each resume
         // has less left to do, so the window shrinks with the attempts, or a quiet machine finishes before the kill
         for (int attempt = 0; attempt < KILLS + 1 && !Files.exists(out); attempt++) {
-            Process p = start(out);
+            Process p = start(out, files, perFile, withLines);
             long window = referenceMillis / (attempt + 2);
             long delay = window / 5 + (long) (random.nextDouble() * window * 0.6);
             if (attempt == KILLS) {
@@ -80,10 +91,12 @@ class ResumeAfterKillTest {
         for (int i = 0; i < expected.size(); i++) {
             assertEquals(expected.get(i), actual.get(i), "row " + i + " as in the uninterrupted run");
         }
-        System.out.println("resume test: reference run " + referenceMillis + " ms, " + kills + " kills, " + journalsSeen + " journals left, " + actual.size() + " rows equal");
+        System.out.println("resume test" + (withLines ? " with lines" : "") + ": reference run " + referenceMillis + " ms, " + kills
+                + " kills, " + journalsSeen + " journals left, " + actual.size() + " rows equal");
+        return actual;
     }
 
-    private static Process start(Path out) throws Exception {
+    private static Process start(Path out, int files, int perFile, boolean withLines) throws Exception {
         List<String> cmd = new ArrayList<>();
         cmd.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
         cmd.add("-Xmx256m");
@@ -91,9 +104,12 @@ class ResumeAfterKillTest {
         cmd.add(System.getProperty("java.class.path"));
         cmd.add(KillableRun.class.getName());
         cmd.add(out.toString());
-        cmd.add(Integer.toString(FILES));
-        cmd.add(Integer.toString(PER_FILE));
+        cmd.add(Integer.toString(files));
+        cmd.add(Integer.toString(perFile));
         cmd.add(Integer.toString(BUSY_MICROS));
+        if (withLines) {
+            cmd.add("lines");
+        }
         return new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(new File("/dev/null")).start();
     }
 }

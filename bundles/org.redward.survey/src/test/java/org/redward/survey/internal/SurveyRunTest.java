@@ -30,15 +30,23 @@ class SurveyRunTest {
     @TempDir
     Path dir;
 
-    /** Writes the main table as lines of cells, to compare catalogues. */
+    /**
+     * Writes every table as lines of cells, to compare catalogues: the main table's rows as they
+     * are (seconds zeroed), then each further table's rows prefixed with its name.
+     */
     static final class LinesWriter implements CatalogWriter {
         @Override
         public void write(Catalog catalog, Path file) throws IOException {
             List<String> lines = new ArrayList<>();
-            int seconds = catalog.tables().get(0).columnIndex("seconds");
-            for (Object[] row : catalog.tables().get(0).rows()) {
-                row[seconds] = 0.0;
-                lines.add(java.util.Arrays.toString(row));
+            for (int t = 0; t < catalog.tables().size(); t++) {
+                var table = catalog.tables().get(t);
+                int seconds = table.columnIndex("seconds");
+                for (Object[] row : table.rows()) {
+                    if (seconds >= 0) {
+                        row[seconds] = 0.0;
+                    }
+                    lines.add((t == 0 ? "" : table.name() + ": ") + java.util.Arrays.toString(row));
+                }
             }
             Files.write(file, lines, StandardCharsets.UTF_8);
         }

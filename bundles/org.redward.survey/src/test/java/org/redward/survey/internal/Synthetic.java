@@ -50,6 +50,11 @@ final class Synthetic {
 
     /** A source of {@code files} invented files of {@code perFile} spectra each; every 50th spectrum is unreadable. */
     static Feed.Source source(List<Path> files, int perFile) {
+        return source(files, perFile, Synthetic::spectrum);
+    }
+
+    /** As {@link #source(List, int)}, spectrum number k made by {@code make}. */
+    static Feed.Source source(List<Path> files, int perFile, java.util.function.IntFunction<Spectrum> make) {
         return new Feed.Source() {
             @Override
             public List<Path> expand(List<Path> inputs) {
@@ -72,7 +77,7 @@ final class Synthetic {
                         if (k % 50 == 49) {
                             return SpectrumRecord.failed(f, i, "row " + i, f + ": row " + i + ": column FLUX holds no numbers");
                         }
-                        return SpectrumRecord.ok(f, i, "row " + i, spectrum(k));
+                        return SpectrumRecord.ok(f, i, "row " + i, make.apply(k));
                     }
 
                     @Override
@@ -89,6 +94,68 @@ final class Synthetic {
             out.add(dir.resolve(String.format(Locale.ROOT, "field-%03d.fits", i)));
         }
         return out;
+    }
+
+    /** Rest vacuum wavelengths (Angstrom) of the lines planted by {@link #lineSpectrum}: H-beta, [O III] 5008, H-alpha (as in the standard list). */
+    static final double[] LINE_REST_ANGSTROM = {4862.683, 5008.240, 6564.614};
+
+    /** The redshift planted in line spectrum number n. */
+    static double lineZ(int n) {
+        return 0.02 + (n % 97) * 0.002;
+    }
+
+    /**
+     * Line spectrum number {@code n} (invented): a flat continuum of 1 with 0.05 noise-free errors on
+     * a 2-Angstrom grid from 3800 to 9200 Angstrom, and Gaussian emission lines (sigma 3 Angstrom
+     * observed) at {@link #LINE_REST_ANGSTROM} times 1 + {@link #lineZ}.
+     */
+    static Spectrum lineSpectrum(int n) {
+        int pixels = 2700;
+        double z = lineZ(n);
+        SpectralAxis axis = SpectralAxis.linear(3800, 2, pixels, SpectralUnit.ANGSTROM, Medium.VACUUM);
+        double[] flux = new double[pixels];
+        double[] ivar = new double[pixels];
+        double[] peak = {1.5, 4.0, 5.0};
+        for (int i = 0; i < pixels; i++) {
+            double w = 3800 + 2.0 * i;
+            flux[i] = 1.0;
+            for (int k = 0; k < LINE_REST_ANGSTROM.length; k++) {
+                double d = (w - LINE_REST_ANGSTROM[k] * (1 + z)) / 3.0;
+                flux[i] += peak[k] * Math.exp(-0.5 * d * d);
+            }
+            ivar[i] = 400.0;
+        }
+        SpectrumMetadata md = SpectrumMetadata.builder().objectId(String.format(Locale.ROOT, "LIN-%06d", n)).build();
+        return Spectrum.of(axis, flux, ivar, new boolean[pixels], "1e-17 erg/s/cm2/Angstrom", md);
+    }
+
+    /** Gives the planted redshift of a line spectrum (read back from its id). */
+    static final class PlantedEstimation implements Estimation {
+        @Override
+        public void measure(Spectrum s, MeasuredRow.Builder row) {
+            int n = Integer.parseInt(s.metadata().objectId().orElseThrow().substring(4));
+            row.z(lineZ(n), 1e-5).objectClass(ObjectClass.GALAXY.key(), "planted").grade("test", Double.NaN);
+        }
+
+        @Override
+        public String id() {
+            return "planted";
+        }
+
+        @Override
+        public String bundle() {
+            return "test.planted 1.0.0";
+        }
+    }
+
+    /** The product's line step with the lines bundle's own finder, identifier and standard list (no framework). */
+    static LineStep lineStep() {
+        return new ServiceLineStep(
+                org.redward.api.registry.Provided.of("matched-gauss", new org.redward.lines.internal.MatchedFilterFinder(),
+                        "org.redward.lines", "test", "", java.util.Map.of()),
+                org.redward.api.registry.Provided.of("pair-vote", new org.redward.lines.internal.PairVoteIdentifier(),
+                        "org.redward.lines", "test", "", java.util.Map.of()),
+                org.redward.lines.internal.LineListFile.standard(), id -> List.of());
     }
 
     /** Finds the spike and returns z = lambda / 5000 - 1. */
