@@ -233,18 +233,11 @@ final class Pipeline {
             long started = t.startNanos;
             long waitNanos = started == 0 ? TimeUnit.MILLISECONDS.toNanos(100) : started + limitNanos - System.nanoTime();
             // a task done in time but collected late (behind a slow one) is not timed out: counts only when this completes it
-            if (started != 0 && waitNanos <= 0 && !t.result.isDone() && t.beforeLines != null) {
-                linesTimedOut(t);
-            } else if (started != 0 && waitNanos <= 0 && !t.result.isDone()) {
-                String reason = String.format(Locale.ROOT, "estimator gave no answer within the time limit of %s s (bundle %s); abandoned",
-                        seconds(timeLimit), estimation.bundle());
-                if (t.result.complete(base(t).failed(reason).fault(MeasuredRow.FAULT_TIMED_OUT, estimation.bundle()).build())) {
-                    count(estimation.bundle(), MeasuredRow.FAULT_TIMED_OUT, reason);
-                    abandon(t);
-                    if (hungAlive.get() >= MAX_HUNG && disabledReason == null) {
-                        disabledReason = "estimator disabled for the rest of the run after " + MAX_HUNG
-                                + " spectra exceeded the time limit (bundle " + estimation.bundle() + ")";
-                    }
+            if (started != 0 && waitNanos <= 0 && !t.result.isDone()) {
+                if (t.beforeLines != null) {
+                    linesTimedOut(t);
+                } else {
+                    estimatorTimedOut(t);
                 }
             }
             try {
@@ -265,6 +258,24 @@ final class Pipeline {
             th.interrupt();
         }
         startWorker();
+    }
+
+    /**
+     * The estimator ran beyond the time limit: the task fails (fault timed_out) and its thread is
+     * abandoned; after {@link #MAX_HUNG} such threads the estimator is disabled for the rest of the run.
+     */
+    private void estimatorTimedOut(Task t) {
+        String reason = String.format(Locale.ROOT, "estimator gave no answer within the time limit of %s s (bundle %s); abandoned",
+                seconds(timeLimit), estimation.bundle());
+        if (!t.result.complete(base(t).failed(reason).fault(MeasuredRow.FAULT_TIMED_OUT, estimation.bundle()).build())) {
+            return;
+        }
+        count(estimation.bundle(), MeasuredRow.FAULT_TIMED_OUT, reason);
+        abandon(t);
+        if (hungAlive.get() >= MAX_HUNG && disabledReason == null) {
+            disabledReason = "estimator disabled for the rest of the run after " + MAX_HUNG
+                    + " spectra exceeded the time limit (bundle " + estimation.bundle() + ")";
+        }
     }
 
     /**
