@@ -101,8 +101,9 @@ class SurveyScaleBenchmark {
         }
         say("survey ready in %.0f s (generated now, or reused when already complete): %d files in %s", secs(t0), files.size(), survey);
 
-        Step one = measure(dir, "subset-1-thread", firstSpectra(dir, files, n, subset), 1);
-        Step two = measure(dir, "subset-2-threads", firstSpectra(dir, files, n, subset), 2);
+        Path subsetList = firstSpectra(dir, files, n, subset);
+        Step one = measure(dir, "subset-1-thread", subsetList, 1);
+        Step two = measure(dir, "subset-2-threads", subsetList, 2);
         say("BENCHMARK speed-up 1 -> 2 threads on the first %d spectra%s: %.2f (goal >= 1.8) from the command's figures"
                 + " (1 thread %.1f spectra/s, 2 threads %.1f spectra/s); %.2f after warm-up, over spectra %d-%d of the run, timed"
                 + " from the journal (1 thread %.1f, 2 threads %.1f spectra/s); load %s / %s", one.spectra,
